@@ -1,0 +1,54 @@
+import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import express from 'express';
+import helmet from 'helmet';
+import { Logger } from 'nestjs-pino';
+import type { DestinationStream } from 'pino';
+import { AppModule } from './app.module.js';
+import { bodyErrorHandler } from './common/middleware/body-errors.js';
+import { createValidationPipe } from './common/validation.js';
+import type { AppConfig } from './config/config.js';
+
+/** Builds the whole application; main.ts and the end-to-end tests share it. */
+export async function createApp(config: AppConfig, logStream?: DestinationStream): Promise<NestExpressApplication> {
+  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(config, logStream), {
+    bodyParser: false,
+    bufferLogs: true,
+  });
+  app.useLogger(app.get(Logger));
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'script-src': ["'self'"],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:'],
+          'font-src': ["'self'"],
+          'connect-src': ["'self'"],
+          'worker-src': ["'self'"],
+          'manifest-src': ["'self'"],
+          // Served over plain HTTP on a LAN too: never rewrite requests to https.
+          'upgrade-insecure-requests': null,
+        },
+      },
+    }),
+  );
+  app.use(express.json({ limit: config.bodyLimit }));
+  app.use(bodyErrorHandler);
+  app.setGlobalPrefix('api');
+  app.useGlobalPipes(createValidationPipe());
+  app.enableShutdownHooks();
+
+  const docs = new DocumentBuilder()
+    .setTitle('Plumbline API')
+    .setDescription('Fieldwork projects, quota cells, interviews, balance and benchmarks')
+    .setVersion('0.1.0')
+    .addBearerAuth()
+    .build();
+  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, docs));
+
+  return app;
+}

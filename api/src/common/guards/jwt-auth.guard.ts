@@ -1,0 +1,27 @@
+import { ExecutionContext, Injectable, UnauthorizedException } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
+import { AuthGuard } from '@nestjs/passport';
+import { IS_PUBLIC } from '../decorators/public.decorator.js';
+
+/** Applied to every route; @Public() routes skip it. */
+@Injectable()
+export class JwtAuthGuard extends AuthGuard('jwt') {
+  constructor(private readonly reflector: Reflector) {
+    super();
+  }
+
+  override canActivate(context: ExecutionContext) {
+    const isPublic = this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, [context.getHandler(), context.getClass()]);
+    return isPublic ? true : super.canActivate(context);
+  }
+
+  override handleRequest<T>(err: unknown, user: T, info: unknown): T {
+    if (err || !user) {
+      const reason = info instanceof Error ? info.message : '';
+      if (reason === 'jwt expired') throw new UnauthorizedException('Your sign-in has expired; refresh it or sign in again');
+      if (reason === 'No auth token') throw new UnauthorizedException('Sign in first: this needs an access token');
+      throw new UnauthorizedException('The access token is not valid');
+    }
+    return user;
+  }
+}

@@ -1,0 +1,1 @@
+export const APP_CONFIG = Symbol('APP_CONFIG');

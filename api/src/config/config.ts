@@ -1,0 +1,63 @@
+// Configuration is read from the environment once, at start-up, and validated here.
+// A missing or malformed value stops the server with a message naming the variable.
+
+export interface AppConfig {
+  host: string;
+  port: number;
+  databaseUrl: string;
+  jwtSecret: string;
+  accessTokenTtlSeconds: number;
+  refreshTokenTtlSeconds: number;
+  signInLimit: number;
+  signInWindowSeconds: number;
+  bodyLimit: string;
+  pwaDist: string | null;
+  logLevel: string;
+}
+
+export class ConfigError extends Error {}
+
+type Env = Record<string, string | undefined>;
+
+function integer(env: Env, name: string, fallback: number, min: number, max: number): number {
+  const raw = env[name];
+  if (raw === undefined || raw === '') return fallback;
+  if (!/^\d+$/.test(raw)) throw new ConfigError(`${name} must be a whole number, got "${raw}"`);
+  const value = Number(raw);
+  if (value < min || value > max) throw new ConfigError(`${name} must be between ${min} and ${max}, got ${value}`);
+  return value;
+}
+
+function required(env: Env, name: string): string {
+  const value = env[name];
+  if (!value) throw new ConfigError(`${name} is not set`);
+  return value;
+}
+
+const LOG_LEVELS = ['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'];
+
+export function loadConfig(env: Env = process.env): AppConfig {
+  const databaseUrl = required(env, 'DATABASE_URL');
+  if (!/^postgres(ql)?:\/\//.test(databaseUrl)) {
+    throw new ConfigError('DATABASE_URL must be a postgres:// URL');
+  }
+  const jwtSecret = required(env, 'JWT_SECRET');
+  if (jwtSecret.length < 32) throw new ConfigError('JWT_SECRET must be at least 32 characters long');
+  const bodyLimit = env.BODY_LIMIT || '1mb';
+  if (!/^\d+(b|kb|mb)$/i.test(bodyLimit)) throw new ConfigError(`BODY_LIMIT must look like 100kb or 1mb, got "${bodyLimit}"`);
+  const logLevel = env.LOG_LEVEL || 'info';
+  if (!LOG_LEVELS.includes(logLevel)) throw new ConfigError(`LOG_LEVEL must be one of ${LOG_LEVELS.join(', ')}`);
+  return {
+    host: env.HOST || '127.0.0.1',
+    port: integer(env, 'PORT', 3000, 0, 65535),
+    databaseUrl,
+    jwtSecret,
+    accessTokenTtlSeconds: integer(env, 'ACCESS_TOKEN_TTL', 900, 10, 86_400),
+    refreshTokenTtlSeconds: integer(env, 'REFRESH_TOKEN_TTL', 30 * 86_400, 60, 365 * 86_400),
+    signInLimit: integer(env, 'SIGNIN_LIMIT', 10, 1, 10_000),
+    signInWindowSeconds: integer(env, 'SIGNIN_WINDOW', 60, 1, 86_400),
+    bodyLimit,
+    pwaDist: env.PWA_DIST || null,
+    logLevel,
+  };
+}

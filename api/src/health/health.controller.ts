@@ -1,0 +1,22 @@
+import { Controller, Get, Inject, ServiceUnavailableException } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import type { Knex } from 'knex';
+import { Public } from '../common/decorators/public.decorator.js';
+import { KNEX } from '../database/database.constants.js';
+
+@ApiTags('health')
+@Controller('health')
+export class HealthController {
+  constructor(@Inject(KNEX) private readonly db: Knex) {}
+
+  @Public()
+  @Get()
+  async check() {
+    try {
+      await this.db.raw('select 1');
+    } catch {
+      throw new ServiceUnavailableException('The database is not reachable');
+    }
+    return { status: 'ok', database: 'up' };
+  }
+}

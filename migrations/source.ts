@@ -1,0 +1,23 @@
+// A static list of the migrations, so the same set runs from scripts (tsx) and
+// from the test suites (Vitest) without Knex scanning a folder for files.
+// Add each new migration here, in timestamp order.
+import type { Knex } from 'knex';
+import * as m0001 from './20261202000100_organisations_and_users.js';
+import * as m0002 from './20261202000200_projects.js';
+import * as m0003 from './20261202000300_sign_in_throttle.js';
+
+const migrations: Record<string, Knex.Migration> = {
+  '20261202000100_organisations_and_users': m0001,
+  '20261202000200_projects': m0002,
+  '20261202000300_sign_in_throttle': m0003,
+};
+
+export const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(migrations),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => {
+    const migration = migrations[name];
+    if (!migration) throw new Error(`unknown migration ${name}`);
+    return migration;
+  },
+};

@@ -1,0 +1,4 @@
+#!/usr/bin/env bash
+# `npm run db:stop`: stops a PostgreSQL cluster left running by `npm start` or `npm test`.
+source "$(dirname "$0")/lib.sh"
+stop_postgres

@@ -1,0 +1,48 @@
+#!/usr/bin/env bash
+# `npm start`: dependencies, PostgreSQL on loopback, migrations, demo data, builds,
+# then the API (which also serves the built PWA). Ctrl-C stops what this run started.
+source "$(dirname "$0")/lib.sh"
+cd "$ROOT"
+
+ensure_node_modules
+ensure_postgres_running
+DB_NAME="${PLUMBLINE_DB_NAME:-plumbline}"
+ensure_database "$DB_NAME"
+export DATABASE_URL; DATABASE_URL="$(database_url "$DB_NAME")"
+export JWT_SECRET; JWT_SECRET="${JWT_SECRET:-$(jwt_secret)}"
+export HOST="${HOST:-127.0.0.1}" PORT="${PORT:-3000}"
+export PWA_DIST="$ROOT/pwa/dist"
+
+API_PID=
+cleanup() {
+  trap - INT TERM EXIT
+  [[ -n "$API_PID" ]] && kill "$API_PID" 2>/dev/null && wait "$API_PID" 2>/dev/null
+  if [[ "$PG_STARTED_HERE" == 1 ]]; then stop_postgres; fi
+}
+trap cleanup INT TERM EXIT
+
+npx tsx scripts/migrate.ts || die "migrations failed"
+npx tsx scripts/seed.ts || die "seeding the demo data failed"
+build_all
+
+node api/dist/main.js &
+API_PID=$!
+for _ in $(seq 1 100); do
+  if curl -fsS "http://$HOST:$PORT/api/health" >/dev/null 2>&1; then break; fi
+  kill -0 "$API_PID" 2>/dev/null || die "the API stopped during start-up (see the lines above)"
+  sleep 0.2
+done
+cat <<MSG
+
+  Plumbline is running at http://$HOST:$PORT   (API docs: http://$HOST:$PORT/api/docs)
+
+  Demo sign-ins (password for all: plumbline-demo)
+    admin@vellmoor.example        admin: people and roles
+    lead@vellmoor.example         project lead: set-up, balance, benchmarks
+    supervisor@vellmoor.example   supervisor: quota board, review queue
+    interviewer@vellmoor.example  interviewer: log contacts, outbox
+    client@vellmoor.example       client: read-only progress
+
+  Ctrl-C stops the API$( [[ $PG_STARTED_HERE == 1 ]] && echo " and PostgreSQL" ).
+MSG
+wait "$API_PID"
