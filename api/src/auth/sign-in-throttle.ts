@@ -22,6 +22,10 @@ export class PostgresThrottlerStorage implements ThrottlerStorage {
       [key, ttl / 1000],
     );
     const row = result.rows[0]!;
+    // Now and then, forget windows that ended long ago so the table stays small.
+    if (Math.random() < 0.01) {
+      await this.db('throttle_hits').where('expires_at', '<', this.db.raw("now() - interval '1 hour'")).delete();
+    }
     const isBlocked = row.hits > limit;
     return { totalHits: row.hits, timeToExpire: row.seconds_left, isBlocked, timeToBlockExpire: isBlocked ? row.seconds_left : 0 };
   }
