@@ -13,7 +13,9 @@ import type { AppConfig } from './config/config.js';
 import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
+import { InterviewsModule } from './interviews/interviews.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
+import { QuotasModule } from './quotas/quotas.module.js';
 import { UsersModule } from './users/users.module.js';
 
 @Module({})
@@ -41,6 +43,8 @@ export class AppModule {
         AuthModule,
         UsersModule,
         ProjectsModule,
+        QuotasModule,
+        InterviewsModule,
         ...pwaModules(config),
       ],
       providers: [
