@@ -1,0 +1,295 @@
+import { EstimationInputError } from './errors.js';
+
+/** One category of a quota variable and its population share (any non-negative number; normalised per variable). */
+export interface CategoryShare {
+  category: string;
+  share: number;
+}
+
+/** Population targets for one variable. */
+export interface MarginTarget {
+  variable: string;
+  shares: readonly CategoryShare[];
+}
+
+/**
+ * A group of interviews that share every raking category (and the same base weight):
+ * the unit raking works on, so its cost follows the number of cells, not interviews.
+ */
+export interface RakingCell {
+  categories: Readonly<Record<string, string>>;
+  count: number;
+  /** Base weight of each interview in the cell; 1 when absent. */
+  baseWeight?: number;
+}
+
+export interface RakingOptions {
+  /** Bound on max |weighted share − target share| over all categories. Default 1e-6. */
+  tolerance?: number;
+  /** Limit on full sweeps over the variables. Default 100. */
+  maxIterations?: number;
+  /** Largest weight allowed, relative to mean 1. Default none. */
+  cap?: number;
+  /** Smallest weight allowed, relative to mean 1. Default none. */
+  floor?: number;
+}
+
+export interface MarginReport {
+  variable: string;
+  category: string;
+  /** Target share (normalised). */
+  target: number;
+  unweighted: number;
+  weighted: number;
+}
+
+export interface RakingResult {
+  converged: boolean;
+  /** Full sweeps done. */
+  iterations: number;
+  /** Max |weighted share − target| over all categories after the last sweep. */
+  maxMarginError: number;
+  /** Weight of each interview in cell i (same order as the cells); mean 1 over interviews. */
+  weights: number[];
+  margins: MarginReport[];
+}
+
+interface Prepared {
+  /** level[v][j]: index of cell j's category in variable v. */
+  level: Int32Array[];
+  counts: Float64Array;
+  /** Target total weight per variable and category (shares × n). */
+  targetTotals: Float64Array[];
+  targetShares: number[][];
+  n: number;
+}
+
+/**
+ * Raking (iterative proportional fitting) after Deming and Stephan (1940): starting from
+ * the base weights, each variable's categories are scaled in turn to their target totals;
+ * full sweeps repeat until every margin is within the tolerance or the sweep limit is hit.
+ *
+ * A cap and floor (relative to mean 1) are honoured by alternating cap and rake inside each
+ * step: a category's factor is the one that meets its target once the scaled weights are
+ * clipped to [floor, cap] (a monotone one-dimensional solve), the bounded raking of
+ * Deville and Särndal (1992, "Calibration estimators in survey sampling", JASA 87) in its
+ * iterative-proportional form. Bounds that no weights can meet are an input error.
+ */
+export function rake(
+  cells: readonly RakingCell[],
+  targets: readonly MarginTarget[],
+  options: RakingOptions = {},
+): RakingResult {
+  const tolerance = options.tolerance ?? 1e-6;
+  const maxIterations = options.maxIterations ?? 100;
+  const cap = options.cap ?? Infinity;
+  const floor = options.floor ?? 0;
+  if (!(tolerance > 0)) throw new EstimationInputError('tolerance must be a positive number');
+  if (!Number.isInteger(maxIterations) || maxIterations < 1) {
+    throw new EstimationInputError('maximum iterations must be a whole number of at least 1');
+  }
+  if (!(cap >= 1)) throw new EstimationInputError(`cap ${cap} is infeasible: weights have mean 1, so the cap must be at least 1`);
+  if (!(floor >= 0 && floor <= 1)) {
+    throw new EstimationInputError(`floor ${floor} is infeasible: it must lie between 0 and 1 (weights have mean 1)`);
+  }
+  const p = prepare(cells, targets);
+  checkBoundsFeasible(p, targets, cap, floor);
+
+  const weights = initialWeights(cells, p.n);
+  const bounded = cap < Infinity || floor > 0;
+  let error = maxError(p, weights);
+  let iterations = 0;
+  while (error > tolerance && iterations < maxIterations) {
+    for (let v = 0; v < p.level.length; v++) adjustVariable(p, v, weights, floor, cap, bounded);
+    iterations++;
+    error = maxError(p, weights);
+  }
+  normaliseMean(weights, p.counts, p.n);
+  return {
+    converged: error <= tolerance,
+    iterations,
+    maxMarginError: error,
+    weights: Array.from(weights),
+    margins: marginReport(p, targets, weights),
+  };
+}
+
+function prepare(cells: readonly RakingCell[], targets: readonly MarginTarget[]): Prepared {
+  if (targets.length === 0) throw new EstimationInputError('no raking variables given');
+  if (cells.length === 0) throw new EstimationInputError('no interviews to weight');
+  const seen = new Set<string>();
+  const counts = Float64Array.from(cells, (c, j) => {
+    if (!(Number.isFinite(c.count) && c.count >= 0)) throw new EstimationInputError(`cell ${j}: count must be a non-negative number`);
+    return c.count;
+  });
+  const n = counts.reduce((a, b) => a + b, 0);
+  if (!(n > 0)) throw new EstimationInputError('no interviews to weight');
+  const level: Int32Array[] = [];
+  const targetTotals: Float64Array[] = [];
+  const targetShares: number[][] = [];
+  for (const t of targets) {
+    if (seen.has(t.variable)) throw new EstimationInputError(`variable ${t.variable} is given twice`);
+    seen.add(t.variable);
+    const shares = normaliseShares(t);
+    const index = new Map(t.shares.map((s, i) => [s.category, i]));
+    const lv = new Int32Array(cells.length);
+    const sample = new Float64Array(t.shares.length);
+    cells.forEach((cell, j) => {
+      const category = cell.categories[t.variable];
+      if (category === undefined) throw new EstimationInputError(`variable ${t.variable} is missing from the interviews`);
+      const i = index.get(category);
+      if (i === undefined) throw new EstimationInputError(`variable ${t.variable}: category "${category}" has no target`);
+      lv[j] = i;
+      sample[i] = (sample[i] ?? 0) + (counts[j] ?? 0);
+    });
+    shares.forEach((share, i) => {
+      const category = t.shares[i]?.category ?? '';
+      if (share > 0 && sample[i] === 0) {
+        throw new EstimationInputError(`variable ${t.variable}: category "${category}" has a target but no respondents`);
+      }
+      if (share === 0 && (sample[i] ?? 0) > 0) {
+        throw new EstimationInputError(`variable ${t.variable}: category "${category}" has respondents but a target share of 0`);
+      }
+    });
+    level.push(lv);
+    targetShares.push(shares);
+    targetTotals.push(Float64Array.from(shares, (s) => s * n));
+  }
+  return { level, counts, targetTotals, targetShares, n };
+}
+
+/** Shares of one variable scaled to sum to 1, after checking they are usable. */
+export function normaliseShares(t: MarginTarget): number[] {
+  const categories = new Set<string>();
+  let sum = 0;
+  for (const s of t.shares) {
+    if (categories.has(s.category)) throw new EstimationInputError(`variable ${t.variable}: category "${s.category}" is given twice`);
+    categories.add(s.category);
+    if (!(Number.isFinite(s.share) && s.share >= 0)) {
+      throw new EstimationInputError(`variable ${t.variable}: category "${s.category}" share must be a non-negative number`);
+    }
+    sum += s.share;
+  }
+  if (!(sum > 0)) throw new EstimationInputError(`variable ${t.variable}: all shares are zero`);
+  return t.shares.map((s) => s.share / sum);
+}
+
+function checkBoundsFeasible(p: Prepared, targets: readonly MarginTarget[], cap: number, floor: number): void {
+  p.targetTotals.forEach((totals, v) => {
+    const sample = new Float64Array(totals.length);
+    p.level[v]?.forEach((i, j) => (sample[i] = (sample[i] ?? 0) + (p.counts[j] ?? 0)));
+    totals.forEach((target, i) => {
+      const m = sample[i] ?? 0;
+      if (m === 0) return;
+      const needed = target / m;
+      if (needed > cap || needed < floor) {
+        const t = targets[v];
+        throw new EstimationInputError(
+          `cap ${cap} and floor ${floor} are infeasible: variable ${t?.variable} category "${t?.shares[i]?.category}" ` +
+            `needs a mean weight of ${needed.toPrecision(4)}`,
+        );
+      }
+    });
+  });
+}
+
+function initialWeights(cells: readonly RakingCell[], n: number): Float64Array {
+  const w = Float64Array.from(cells, (c, j) => {
+    const b = c.baseWeight ?? 1;
+    if (!(Number.isFinite(b) && b > 0)) throw new EstimationInputError(`cell ${j}: base weight must be a positive number`);
+    return b;
+  });
+  let total = 0;
+  cells.forEach((c, j) => (total += c.count * (w[j] ?? 0)));
+  return w.map((x) => (x * n) / total);
+}
+
+function categoryTotals(p: Prepared, v: number, weights: Float64Array): Float64Array {
+  const level = p.level[v] as Int32Array;
+  const totals = new Float64Array((p.targetTotals[v] as Float64Array).length);
+  for (let j = 0; j < level.length; j++) {
+    const i = level[j] as number;
+    totals[i] = (totals[i] as number) + (p.counts[j] as number) * (weights[j] as number);
+  }
+  return totals;
+}
+
+function adjustVariable(p: Prepared, v: number, weights: Float64Array, floor: number, cap: number, bounded: boolean): void {
+  const level = p.level[v] as Int32Array;
+  const targets = p.targetTotals[v] as Float64Array;
+  const current = categoryTotals(p, v, weights);
+  const factors = targets.map((t, i) => (t > 0 ? t / (current[i] as number) : 1));
+  if (!bounded) {
+    for (let j = 0; j < level.length; j++) weights[j] = (weights[j] as number) * (factors[level[j] as number] as number);
+    return;
+  }
+  targets.forEach((target, i) => {
+    if (target === 0) return;
+    const members: number[] = [];
+    for (let j = 0; j < level.length; j++) if (level[j] === i) members.push(j);
+    const f = boundedFactor(members, p.counts, weights, target, floor, cap, factors[i] as number);
+    for (const j of members) weights[j] = clip((weights[j] as number) * f, floor, cap);
+  });
+}
+
+const clip = (x: number, lo: number, hi: number): number => Math.min(hi, Math.max(lo, x));
+
+/** Factor f with Σ count·clip(w·f) = target: bisection on log f, then an exact solve on the final linear piece. */
+function boundedFactor(
+  members: number[], counts: Float64Array, weights: Float64Array,
+  target: number, floor: number, cap: number, guess: number,
+): number {
+  const total = (f: number) => members.reduce((s, j) => s + (counts[j] as number) * clip((weights[j] as number) * f, floor, cap), 0);
+  let lo = guess;
+  let hi = guess;
+  for (let k = 0; k < 1100 && total(lo) > target; k++) lo /= 2;
+  for (let k = 0; k < 1100 && total(hi) < target; k++) hi *= 2;
+  for (let k = 0; k < 200 && hi / lo > 1 + 1e-15; k++) {
+    const mid = Math.sqrt(lo * hi);
+    if (total(mid) < target) lo = mid;
+    else hi = mid;
+  }
+  const f = Math.sqrt(lo * hi);
+  let fixed = 0;
+  let free = 0;
+  for (const j of members) {
+    const w = weights[j] as number;
+    const c = counts[j] as number;
+    if (w * f >= cap) fixed += c * cap;
+    else if (w * f <= floor) fixed += c * floor;
+    else free += c * w;
+  }
+  return free > 0 ? (target - fixed) / free : f;
+}
+
+function maxError(p: Prepared, weights: Float64Array): number {
+  let worst = 0;
+  for (let v = 0; v < p.level.length; v++) {
+    const totals = categoryTotals(p, v, weights);
+    const shares = p.targetShares[v] as number[];
+    totals.forEach((t, i) => (worst = Math.max(worst, Math.abs(t / p.n - (shares[i] as number)))));
+  }
+  return worst;
+}
+
+function normaliseMean(weights: Float64Array, counts: Float64Array, n: number): void {
+  let total = 0;
+  weights.forEach((w, j) => (total += w * (counts[j] as number)));
+  const scale = n / total;
+  weights.forEach((w, j) => (weights[j] = w * scale));
+}
+
+function marginReport(p: Prepared, targets: readonly MarginTarget[], weights: Float64Array): MarginReport[] {
+  const ones = new Float64Array(weights.length).fill(1);
+  return targets.flatMap((t, v) => {
+    const weighted = categoryTotals(p, v, weights);
+    const unweighted = categoryTotals(p, v, ones);
+    return t.shares.map((s, i) => ({
+      variable: t.variable,
+      category: s.category,
+      target: p.targetShares[v]?.[i] as number,
+      unweighted: (unweighted[i] as number) / p.n,
+      weighted: (weighted[i] as number) / p.n,
+    }));
+  });
+}
