@@ -44,9 +44,10 @@ export class QuotasController {
     @CurrentUser() user: AuthUser,
     @Param('projectId', ParseUUIDPipe) projectId: string,
     @UploadedFile() file: { buffer: Buffer; originalname: string } | undefined,
+    @Body('interlock') interlock: unknown,
   ) {
     await this.access.find(user, projectId);
-    return this.targets.parseUpload(file);
+    return this.targets.parseUpload(file, typeof interlock === 'string' ? interlock : '');
   }
 
   @Get('cells')

@@ -96,7 +96,7 @@ export class TargetsService {
   }
 
   /** Reads an uploaded targets file into the shape `save` takes, without saving anything. */
-  parseUpload(file: { buffer: Buffer; originalname?: string } | undefined): SaveTargetsDto {
+  parseUpload(file: { buffer: Buffer; originalname?: string } | undefined, interlock = ''): SaveTargetsDto {
     if (!file) throw invalid('attach the targets file as the form field "file"', 'file');
     const text = new TextDecoder('utf-8', { fatal: true });
     let content: string;
@@ -107,13 +107,18 @@ export class TargetsService {
     }
     try {
       const parsed = parseTargetsCsv(content, file.originalname || 'targets file');
-      return {
+      const chosen = interlock.split(',').map((s) => s.trim()).filter(Boolean);
+      const unknown = chosen.find((name) => !parsed.targets.some((t) => t.variable === name));
+      if (unknown) throw invalid(`interlock: unknown variable ${unknown}; the file has ${parsed.targets.map((t) => t.variable).join(', ')}`, 'interlock');
+      const dto: SaveTargetsDto = {
         variables: parsed.targets.map((t) => ({
           name: t.variable,
-          interlocked: false,
+          interlocked: chosen.includes(t.variable),
           categories: t.shares.map((s) => ({ label: s.category, share: s.share })),
         })),
       };
+      checkTargets(dto);
+      return dto;
     } catch (error) {
       if (error instanceof TargetsFormatError) throw invalid(error.message, 'file');
       throw error;
