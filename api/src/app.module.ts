@@ -6,6 +6,7 @@ import type { DestinationStream } from 'pino';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AuthModule } from './auth/auth.module.js';
+import { BalanceModule } from './balance/balance.module.js';
 import { AllExceptionsFilter } from './common/filters/http-exception.filter.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
@@ -45,6 +46,7 @@ export class AppModule {
         ProjectsModule,
         QuotasModule,
         InterviewsModule,
+        BalanceModule,
         ...pwaModules(config),
       ],
       providers: [
