@@ -76,9 +76,45 @@ export async function up(knex: Knex): Promise<void> {
     `ALTER TABLE interviews ADD CONSTRAINT interviews_complete_check
        CHECK (disposition <> 'complete' OR (headline_answer IS NOT NULL AND cardinality(category_ids) > 0))`,
   );
+
+  // Counted interviews (completes not rejected) per project and combination of categories,
+  // kept by statement triggers. Quota boards and balances read these few rows instead of
+  // every interview, so their cost follows the number of cells.
+  await knex.schema.createTable('interview_counts', (t) => {
+    t.uuid('project_id').notNullable().references('projects.id').onDelete('CASCADE');
+    t.specificType('category_ids', 'uuid[]').notNullable();
+    t.integer('n').notNullable();
+    t.integer('yes').notNullable();
+    t.integer('over_quota').notNullable();
+    t.primary(['project_id', 'category_ids']);
+  });
+  const apply = (table: string, sign: string) => `
+      INSERT INTO interview_counts AS c (project_id, category_ids, n, yes, over_quota)
+      SELECT project_id, category_ids, ${sign}count(*), ${sign}count(*) FILTER (WHERE headline_answer),
+             ${sign}count(*) FILTER (WHERE over_quota)
+        FROM ${table}
+       WHERE disposition = 'complete' AND review_status <> 'rejected'
+       GROUP BY project_id, category_ids
+      ON CONFLICT (project_id, category_ids) DO UPDATE
+        SET n = c.n + EXCLUDED.n, yes = c.yes + EXCLUDED.yes, over_quota = c.over_quota + EXCLUDED.over_quota;`;
+  await knex.raw(`
+    CREATE FUNCTION interview_counts_apply() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      IF TG_OP IN ('UPDATE', 'DELETE') THEN ${apply('old_rows', '-')} END IF;
+      IF TG_OP IN ('INSERT', 'UPDATE') THEN ${apply('new_rows', '')} END IF;
+      RETURN NULL;
+    END $$`);
+  await knex.raw(`CREATE TRIGGER interview_counts_insert AFTER INSERT ON interviews
+    REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION interview_counts_apply()`);
+  await knex.raw(`CREATE TRIGGER interview_counts_update AFTER UPDATE ON interviews
+    REFERENCING OLD TABLE AS old_rows NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION interview_counts_apply()`);
+  await knex.raw(`CREATE TRIGGER interview_counts_delete AFTER DELETE ON interviews
+    REFERENCING OLD TABLE AS old_rows FOR EACH STATEMENT EXECUTE FUNCTION interview_counts_apply()`);
 }
 
 export async function down(knex: Knex): Promise<void> {
+  await knex.schema.dropTable('interview_counts');
+  await knex.raw('DROP FUNCTION interview_counts_apply() CASCADE');
   await knex.schema.dropTable('interviews');
   await knex.schema.dropTable('quota_cells');
   await knex.schema.dropTable('quota_categories');

@@ -97,6 +97,20 @@ describe('live balance', () => {
     expect(Math.abs(harrowby.weighted - harrowby.target)).toBeLessThan(1e-6);
   });
 
+  it('leaves interviews rejected on review out of the balance and the cell counts', async () => {
+    const before = (await lead.get(`${base}/balance`)).body;
+    const cellsBefore = (await lead.get(`${base}/cells`)).body.cells;
+    const ids = (await h.db('interviews').where({ project_id: org.projectId }).orderBy('id').limit(10).select('id')).map((r) => r.id);
+    await h.db('interviews').whereIn('id', ids).update({ review_status: 'rejected' });
+    const after = (await lead.get(`${base}/balance`)).body;
+    const cellsAfter = (await lead.get(`${base}/cells`)).body.cells;
+    await h.db('interviews').whereIn('id', ids).update({ review_status: 'pending' });
+    expect(after.n).toBe(before.n - 10);
+    const sum = (cells: { kind: string; achieved: number }[]) => cells.filter((c) => c.kind === 'interlocked').reduce((s, c) => s + c.achieved, 0);
+    expect(sum(cellsAfter)).toBe(sum(cellsBefore) - 10);
+    expect((await lead.get(`${base}/balance`)).body.n).toBe(before.n);
+  });
+
   it('is read-only for clients and hidden from interviewers', async () => {
     const c = await client(h, org, 'client');
     expect((await c.get(`${base}/balance`)).status).toBe(200);

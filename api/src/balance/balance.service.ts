@@ -1,6 +1,6 @@
-// The live balance of a project: completed interviews are counted per combination of
-// categories and headline answer in SQL, and the estimation core rakes those groups to
-// the population targets. No interview is loaded one by one.
+// The live balance of a project: counted interviews per combination of categories and
+// headline answer come from interview_counts (kept in SQL by triggers), and the
+// estimation core rakes those groups to the population targets. No interview is loaded.
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
@@ -9,7 +9,6 @@ import { EstimationInputError } from '../estimation/errors.js';
 import type { MarginTarget } from '../estimation/raking.js';
 import { summariseWeighting, type OutcomeRakingCell, type OutcomeSummary } from '../estimation/weighting-summary.js';
 import { loadActiveTargets } from '../quotas/cell-allocator.js';
-import { counted } from '../quotas/cells.service.js';
 
 export interface BalanceMargin {
   variable: string;
@@ -46,15 +45,10 @@ export class BalanceService {
 
   async balance(project: ProjectRow): Promise<Balance> {
     const { variables } = await loadActiveTargets(this.db, project.id);
-    const groups = await this.db('interviews')
+    const groups = await this.db('interview_counts')
       .where({ project_id: project.id })
-      .whereRaw(counted())
-      .groupBy('category_ids')
-      .select<{ category_ids: string[]; n: number; yes: number }[]>(
-        'category_ids',
-        this.db.raw('count(*)::int AS n'),
-        this.db.raw('count(*) FILTER (WHERE headline_answer)::int AS yes'),
-      );
+      .where('n', '>', 0)
+      .select('category_ids', 'n', 'yes');
 
     const labelOf = new Map<string, { variable: string; label: string }>();
     for (const v of variables) for (const c of v.categories) labelOf.set(c.id, { variable: v.name, label: c.label });

@@ -106,6 +106,15 @@ export interface ThrottleHitRow {
   expires_at: Date;
 }
 
+/** Counted interviews per project and combination of categories (kept by triggers). */
+export interface InterviewCountRow {
+  project_id: string;
+  category_ids: string[];
+  n: number;
+  yes: number;
+  over_quota: number;
+}
+
 declare module 'knex/types/tables.js' {
   interface Tables {
     organisations: OrganisationRow;
@@ -118,5 +127,6 @@ declare module 'knex/types/tables.js' {
     quota_categories: QuotaCategoryRow;
     quota_cells: QuotaCellRow;
     interviews: InterviewRow;
+    interview_counts: InterviewCountRow;
   }
 }

@@ -1,5 +1,5 @@
-// Cell counts come from one grouped query: interviews are first counted per combination
-// of categories, then matched to cells, so the cost follows the number of cells.
+// Cell counts come from interview_counts (counted interviews per combination of
+// categories, kept by triggers) matched to cells, so the cost follows the number of cells.
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
@@ -48,10 +48,7 @@ export class CellsService {
     const { rows } = await db.raw<{
       rows: { id: string; kind: CellView['kind']; label: string; category_ids: string[]; target: number; closed_at: Date | null; achieved: number; over_quota: number }[];
     }>(
-      `WITH g AS (
-         SELECT category_ids, count(*)::int AS n, count(*) FILTER (WHERE over_quota)::int AS over_quota
-           FROM interviews WHERE project_id = ? AND ${counted()}
-          GROUP BY category_ids)
+      `WITH g AS (SELECT category_ids, n, over_quota FROM interview_counts WHERE project_id = ? AND n > 0)
        SELECT c.id, c.kind, c.label, c.category_ids, c.target, c.closed_at,
               coalesce(sum(g.n), 0)::int AS achieved, coalesce(sum(g.over_quota), 0)::int AS over_quota
          FROM quota_cells c LEFT JOIN g ON g.category_ids @> c.category_ids
