@@ -27,7 +27,6 @@ export default defineConfig({
       // Registered from src/app/register-service-worker.ts: the server's CSP allows no inline script.
       injectRegister: false,
       registerType: 'autoUpdate',
-      includeAssets: ['favicon.svg', 'icons/apple-touch-icon-180.png'],
       manifest: {
         name: 'Plumbline',
         short_name: 'Plumbline',

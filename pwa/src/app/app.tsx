@@ -12,7 +12,7 @@ export function App({ queryClient }: { queryClient: QueryClient }) {
     <QueryClientProvider client={queryClient}>
       <IonApp>
         <ErrorBoundary>
-          <IonReactRouter>
+          <IonReactRouter future={{ v7_startTransition: true, v7_relativeSplatPath: true }}>
             <AppRoutes />
           </IonReactRouter>
         </ErrorBoundary>
