@@ -29,7 +29,9 @@ export function ProjectList({ projects }: { projects: Project[] }) {
             </div>
             <div>
               <dt>Target sample</dt>
-              <dd className="pl-figure">{formatCount(project.targetSize)} interviews</dd>
+              <dd>
+                <span className="pl-figure">{formatCount(project.targetSize)}</span> interviews
+              </dd>
             </div>
           </dl>
         </li>
