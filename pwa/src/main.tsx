@@ -8,6 +8,7 @@ import './app/styles/fonts.css';
 import './app/styles/theme.css';
 import './app/styles/shell.css';
 import './app/styles/pages.css';
+import './app/styles/dialog.css';
 import { App } from './app/app';
 import { createQueryClient } from './app/query-client';
 import { registerServiceWorker } from './app/register-service-worker';

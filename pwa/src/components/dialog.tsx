@@ -1,4 +1,4 @@
-import { useEffect, useId, type ReactNode } from 'react';
+import { useEffect, useId, useRef, type ReactNode } from 'react';
 import { createPortal } from 'react-dom';
 
 interface DialogProps {
@@ -12,6 +12,11 @@ interface DialogProps {
 /** A small modal of our own (plain React, so it behaves the same in tests and browsers). */
 export function Dialog({ title, onClose, children, placement = 'centre' }: DialogProps) {
   const titleId = useId();
+  const panel = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    // Move focus into the dialog unless a control inside asked for it (autoFocus).
+    if (panel.current && !panel.current.contains(document.activeElement)) panel.current.focus();
+  }, []);
   useEffect(() => {
     const onKey = (event: KeyboardEvent) => {
       if (event.key === 'Escape') onClose();
@@ -24,6 +29,8 @@ export function Dialog({ title, onClose, children, placement = 'centre' }: Dialo
     <div className="pl-dialog-backdrop" onClick={onClose}>
       <div
         className={`pl-dialog pl-dialog-${placement}`}
+        ref={panel}
+        tabIndex={-1}
         role="dialog"
         aria-modal="true"
         aria-labelledby={titleId}

@@ -59,3 +59,16 @@ describe("lead's projects page", () => {
     expect(screen.getByText('Offline')).toBeInTheDocument();
   });
 });
+
+describe('an ended sign-in', () => {
+  it('takes the person to the sign-in page when the server refuses the refresh', async () => {
+    const api = installFakeApi();
+    api.on('GET', '/api/projects', () => problem(401, 'Unauthorized', 'Access token expired.'));
+    api.on('POST', '/api/auth/refresh', () => problem(401, 'Unauthorized', 'Refresh token expired.'));
+    await signedInAs('lead');
+    renderApp('/lead');
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();
+    expect(window.location.pathname).toBe('/sign-in');
+  });
+});
