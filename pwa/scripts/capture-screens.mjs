@@ -2,6 +2,7 @@
 // (demo-like data), and saves screenshots to /screenshots at phone and desktop sizes. Also
 // checks that the app shell opens offline once the service worker has taken over.
 //   npm run build -w pwa && node pwa/scripts/capture-screens.mjs
+// With --real-api the preview server proxies /api to a running API on 127.0.0.1:3000 instead.
 import { spawn } from 'node:child_process';
 import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -11,6 +12,7 @@ import { chromium } from 'playwright-core';
 
 const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 const outDir = join(repoRoot, 'screenshots');
+const realApi = process.argv.includes('--real-api');
 const port = 4173;
 const base = `http://127.0.0.1:${port}`;
 mkdirSync(outDir, { recursive: true });
@@ -57,7 +59,7 @@ try {
     viewport: { width: 360, height: 640 },
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });
-  await context.route('**/api/**', fakeApi);
+  if (!realApi) await context.route('**/api/**', fakeApi);
   const page = context.pages()[0] ?? (await context.newPage());
   const shot = async (name) => { await page.waitForTimeout(400); await page.screenshot({ path: join(outDir, `${name}.png`) }); console.log(`screenshots/${name}.png`); };
   const signIn = async (role) => {

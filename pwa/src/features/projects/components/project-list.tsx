@@ -1,4 +1,4 @@
-import { formatCount, formatDate } from '../../../lib/format';
+import { formatCalendarDate, formatCount } from '../../../lib/format';
 import type { Project } from '../api/get-projects';
 
 const statusWords: Record<string, string> = {
@@ -24,7 +24,7 @@ export function ProjectList({ projects }: { projects: Project[] }) {
             <div>
               <dt>Field dates</dt>
               <dd>
-                {formatDate(project.fieldStart)} – {formatDate(project.fieldEnd)}
+                {formatCalendarDate(project.fieldStart)} – {formatCalendarDate(project.fieldEnd)}
               </dd>
             </div>
             <div>

@@ -8,7 +8,7 @@ const tram = {
   id: 'p-tram',
   name: 'Vellmoor tram extension',
   topic: 'Support for the proposed tram extension',
-  fieldStart: '2026-03-02',
+  fieldStart: '2026-03-02T00:00:00.000Z',
   fieldEnd: '2026-03-22',
   targetSize: 1200,
   status: 'fieldwork',
