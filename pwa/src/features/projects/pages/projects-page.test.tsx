@@ -1,7 +1,7 @@
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { installFakeApi, json, problem } from '../../../test/fake-api';
+import { authResponse, installFakeApi, json, problem } from '../../../test/fake-api';
 import { renderApp, signedInAs } from '../../../test/render-app';
 
 const tram = {
@@ -70,5 +70,35 @@ describe('an ended sign-in', () => {
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();
     expect(window.location.pathname).toBe('/sign-in');
+  });
+});
+
+describe('another person on the same device', () => {
+  it('never sees the projects loaded for the person whose sign-in ended', async () => {
+    const api = installFakeApi();
+    api.on('GET', '/api/projects', () => json([tram]));
+    await signedInAs('lead');
+    const { queryClient } = renderApp('/lead');
+    await screen.findByRole('heading', { level: 2, name: 'Vellmoor tram extension' });
+
+    // The sign-in ends on the server; the next refresh of the list finds out.
+    api.on('GET', '/api/projects', () => problem(401, 'Unauthorized', 'Access token expired.'));
+    api.on('POST', '/api/auth/refresh', () => problem(401, 'Unauthorized', 'Refresh token expired.'));
+    await queryClient.refetchQueries();
+    await screen.findByRole('heading', { level: 1, name: 'Sign in' });
+
+    api.on('POST', '/api/auth/login', () =>
+      json({ ...authResponse('lead', '2'), user: { ...authResponse('lead').user, id: 'user-lead-2', name: 'Other Lead' } }),
+    );
+    // Their list is still on its way: nothing of the person before may fill the wait.
+    api.on('GET', '/api/projects', () => new Promise<Response>(() => {}));
+    const user = userEvent.setup();
+    await user.type(screen.getByLabelText('E-mail'), 'other-lead@vellmoor.example');
+    await user.type(screen.getByLabelText('Password'), 'plumbline-demo');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Projects' })).toBeInTheDocument();
+    expect(screen.getByText('Loading projects…')).toBeInTheDocument();
+    expect(screen.queryByText('Vellmoor tram extension')).not.toBeInTheDocument();
   });
 });
