@@ -1,6 +1,6 @@
 // Renders Plumbline's icon (a plumb bob on its line above a level mark) to the PNGs the
 // manifest lists, using Debian's chromium through playwright-core. Run it after changing
-// the drawing and commit the PNGs:  node pwa/scripts/render-icons.mjs
+// the drawing and commit the PNGs:  npm run icons -w pwa
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -13,7 +13,7 @@ const paper = '#f6f3ec';
 const brass = '#d6a24a';
 
 // The drawing on a 64-unit grid; `inset` shrinks it towards the centre (maskable safe zone).
-function drawing(inset) {
+function drawing(inset: number): string {
   const s = 1 - inset;
   const t = 32 * inset;
   return `<g transform="translate(${t} ${t}) scale(${s})">
@@ -24,7 +24,7 @@ function drawing(inset) {
   </g>`;
 }
 
-export function iconSvg({ maskable = false } = {}) {
+export function iconSvg({ maskable = false }: { maskable?: boolean } = {}): string {
   const background = maskable
     ? `<rect width="64" height="64" fill="${teal}"/>`
     : `<rect width="64" height="64" rx="14" fill="${teal}"/>`;
