@@ -24,7 +24,9 @@ describe('sign-in at phone size', () => {
       const { page } = browser;
       await signIn(page, baseUrl, `${home.role}@vellmoor.example`);
       await page.waitForURL(`${baseUrl}${home.path}`);
-      await expect(page.getByRole('heading', { level: 1, name: home.title }).first().isVisible()).resolves.toBe(true);
+      const heading = page.getByRole('heading', { level: 1, name: home.title });
+      await heading.waitFor();
+      expect(await heading.isVisible()).toBe(true);
       await screenshot(page, `phone-${home.role}-home`);
     });
   }

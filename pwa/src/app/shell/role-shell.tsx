@@ -1,0 +1,46 @@
+import { IonRouterOutlet } from '@ionic/react';
+import { Navigate, Route } from 'react-router-dom';
+import { HeaderSlotProvider } from '../../components/header-slot';
+import { PlumblineLogo } from '../../components/plumbline-logo';
+import type { SessionUser } from '../../db/plumbline-db';
+import { useWideScreen } from '../../hooks/use-wide-screen';
+import { AccountButton } from '../../features/auth/components/account-button';
+import { AccountSummary } from '../../features/auth/components/account-summary';
+import { homePathFor, roleNavigation } from '../role-navigation';
+import { NavLinks } from './nav-links';
+
+/**
+ * The signed-in frame. Only the person's own role's routes exist here, so any other path
+ * (another role's area, /sign-in, an old link) lands on their home.
+ */
+export function RoleShell({ user }: { user: SessionUser }) {
+  const wide = useWideScreen();
+  const items = roleNavigation[user.role];
+
+  return (
+    <HeaderSlotProvider value={wide ? null : <AccountButton user={user} />}>
+      <div className={`pl-shell ${wide ? 'is-wide' : 'is-narrow'}`}>
+        {wide ? (
+          <aside className="pl-side">
+            <div className="pl-side-brand">
+              <PlumblineLogo size={36} withName />
+            </div>
+            <NavLinks items={items} variant="side" />
+            <AccountSummary user={user} />
+          </aside>
+        ) : null}
+        <div className="pl-shell-main">
+          <div className="pl-shell-outlet">
+            <IonRouterOutlet>
+              {items.map((item) => (
+                <Route key={item.path} path={item.path} element={item.element} />
+              ))}
+              <Route path="*" element={<Navigate to={homePathFor(user.role)} replace />} />
+            </IonRouterOutlet>
+          </div>
+          {!wide && items.length > 1 ? <NavLinks items={items} variant="bottom" /> : null}
+        </div>
+      </div>
+    </HeaderSlotProvider>
+  );
+}

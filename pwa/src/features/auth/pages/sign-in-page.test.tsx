@@ -1,0 +1,79 @@
+import { screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it, vi } from 'vitest';
+import { installFakeApi, json, problem, authResponse } from '../../../test/fake-api';
+import { renderApp } from '../../../test/render-app';
+import { readSession } from '../../../db/session-store';
+
+describe('sign-in page', () => {
+  it('sends a signed-out visitor to the sign-in page', async () => {
+    installFakeApi();
+    renderApp('/lead');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();
+    expect(window.location.pathname).toBe('/sign-in');
+  });
+
+  it("shows the server's message for a wrong password and stays signed out", async () => {
+    const api = installFakeApi();
+    api.on('POST', '/api/auth/login', () => problem(401, 'Unauthorized', 'Wrong e-mail or password.'));
+    renderApp('/sign-in');
+    const user = userEvent.setup();
+
+    await user.type(await screen.findByLabelText('E-mail'), 'lead@vellmoor.example');
+    await user.type(screen.getByLabelText('Password'), 'not-the-password');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    expect(await screen.findByRole('alert')).toHaveTextContent('Wrong e-mail or password.');
+    expect(screen.getByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();
+    expect(await readSession()).toBeUndefined();
+  });
+
+  it('says so when there have been too many attempts', async () => {
+    const api = installFakeApi();
+    api.on('POST', '/api/auth/login', () =>
+      problem(429, 'Too Many Requests', 'Too many sign-in attempts. Try again in a minute.'),
+    );
+    renderApp('/sign-in');
+    const user = userEvent.setup();
+
+    await user.type(await screen.findByLabelText('E-mail'), 'lead@vellmoor.example');
+    await user.type(screen.getByLabelText('Password'), 'guess');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    expect(await screen.findByRole('alert')).toHaveTextContent('Too many sign-in attempts. Try again in a minute.');
+  });
+
+  it('explains that signing in needs the network once when the device is offline', async () => {
+    installFakeApi();
+    vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(false);
+    renderApp('/sign-in');
+    const user = userEvent.setup();
+
+    await user.type(await screen.findByLabelText('E-mail'), 'interviewer@vellmoor.example');
+    await user.type(screen.getByLabelText('Password'), 'plumbline-demo');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'You are offline: signing in needs the network once; work already on this device is kept.',
+    );
+  });
+
+  it('signs in and lands on the role home, and the sign-in survives a reload', async () => {
+    const api = installFakeApi();
+    api.on('POST', '/api/auth/login', () => json(authResponse('lead')));
+    api.on('GET', '/api/projects', () => json([]));
+    const first = renderApp('/sign-in');
+    const user = userEvent.setup();
+
+    await user.type(await screen.findByLabelText('E-mail'), 'lead@vellmoor.example');
+    await user.type(screen.getByLabelText('Password'), 'plumbline-demo');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Projects' })).toBeInTheDocument();
+    expect(window.location.pathname).toBe('/lead');
+
+    first.unmount();
+    renderApp('/lead');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Projects' })).toBeInTheDocument();
+  });
+});

@@ -1,0 +1,29 @@
+// GET /api/users (admin only): the organisation's accounts. Server data: query cache only.
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import type { Role } from '../../../config/roles';
+
+export interface OrganisationUser {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  createdAt: string;
+}
+
+export const userKeys = {
+  all: ['users'] as const,
+  list: () => [...userKeys.all, 'list'] as const,
+};
+
+export function getUsers(signal?: AbortSignal): Promise<OrganisationUser[]> {
+  return apiRequest<OrganisationUser[]>('/users', { signal });
+}
+
+export function usersQueryOptions() {
+  return queryOptions({ queryKey: userKeys.list(), queryFn: ({ signal }) => getUsers(signal) });
+}
+
+export function useUsers() {
+  return useQuery(usersQueryOptions());
+}

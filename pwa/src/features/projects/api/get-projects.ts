@@ -1,0 +1,30 @@
+// GET /api/projects: the projects this user may see. Server data: lives in the query cache.
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+
+export interface Project {
+  id: string;
+  name: string;
+  topic: string;
+  fieldStart: string | null;
+  fieldEnd: string | null;
+  targetSize: number;
+  status: string;
+}
+
+export const projectKeys = {
+  all: ['projects'] as const,
+  list: () => [...projectKeys.all, 'list'] as const,
+};
+
+export function getProjects(signal?: AbortSignal): Promise<Project[]> {
+  return apiRequest<Project[]>('/projects', { signal });
+}
+
+export function projectsQueryOptions() {
+  return queryOptions({ queryKey: projectKeys.list(), queryFn: ({ signal }) => getProjects(signal) });
+}
+
+export function useProjects() {
+  return useQuery(projectsQueryOptions());
+}

@@ -1,0 +1,15 @@
+import { useSyncExternalStore } from 'react';
+
+function subscribe(onChange: () => void): () => void {
+  window.addEventListener('online', onChange);
+  window.addEventListener('offline', onChange);
+  return () => {
+    window.removeEventListener('online', onChange);
+    window.removeEventListener('offline', onChange);
+  };
+}
+
+/** Whether the browser believes it has a network connection right now. */
+export function useOnline(): boolean {
+  return useSyncExternalStore(subscribe, () => navigator.onLine, () => true);
+}

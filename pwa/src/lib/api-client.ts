@@ -1,0 +1,129 @@
+// The only module that talks HTTP. Base path /api on the same origin; the bearer token
+// comes from the device session (db/session-store). On a 401 it refreshes once (one
+// refresh shared by all concurrent requests), stores the rotated tokens and retries once.
+// Offline, a request fails at once with an ApiError of kind 'offline' and nothing is lost:
+// the device's own data lives in Dexie, not here.
+import { clearSession, readSession, saveSession } from '../db/session-store';
+import type { SessionUser } from '../db/plumbline-db';
+import { ApiError, offlineMessage, signedOutMessage, type FieldProblem } from './api-error';
+
+const basePath = '/api';
+
+export interface AuthResponse {
+  accessToken: string;
+  refreshToken: string;
+  expiresIn: number;
+  user: SessionUser;
+}
+
+export interface RequestOptions {
+  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  body?: unknown;
+  /** Send the bearer token and refresh it on 401 (default true). */
+  auth?: boolean;
+  signal?: AbortSignal;
+}
+
+let refreshInFlight: Promise<string> | null = null;
+
+export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  const useAuth = options.auth ?? true;
+  if (!useAuth) return parse<T>(await send(path, options));
+
+  const session = await readSession();
+  if (!session) throw new ApiError(signedOutMessage, 'signed-out', 401);
+  let response = await send(path, options, session.accessToken);
+  if (response.status === 401) {
+    const freshToken = await refreshAccessToken(session.accessToken);
+    response = await send(path, options, freshToken);
+  }
+  return parse<T>(response);
+}
+
+/**
+ * Exchanges the stored refresh token for new tokens, once for all callers waiting at the
+ * same moment. The server rotates the refresh token, so the new one is stored before anyone
+ * retries; a 401 from the server means the sign-in is over and the session row is removed.
+ */
+export function refreshAccessToken(staleAccessToken: string): Promise<string> {
+  refreshInFlight ??= runRefresh(staleAccessToken).finally(() => {
+    refreshInFlight = null;
+  });
+  return refreshInFlight;
+}
+
+async function runRefresh(staleAccessToken: string): Promise<string> {
+  const session = await readSession();
+  if (!session) throw new ApiError(signedOutMessage, 'signed-out', 401);
+  // Another refresh finished while this request was on the wire: use its token.
+  if (session.accessToken !== staleAccessToken) return session.accessToken;
+
+  const response = await send('/auth/refresh', { method: 'POST', body: { refreshToken: session.refreshToken } });
+  if (response.status === 401 || response.status === 400) {
+    await clearSession();
+    throw new ApiError(signedOutMessage, 'signed-out', 401);
+  }
+  const tokens = await parse<AuthResponse>(response);
+  await saveSession(tokens);
+  return tokens.accessToken;
+}
+
+async function send(path: string, options: RequestOptions, accessToken?: string): Promise<Response> {
+  if (typeof navigator !== 'undefined' && navigator.onLine === false) {
+    throw new ApiError(offlineMessage, 'offline');
+  }
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
+  try {
+    return await fetch(`${basePath}${path}`, {
+      method: options.method ?? 'GET',
+      headers,
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      signal: options.signal,
+      credentials: 'same-origin',
+    });
+  } catch (error) {
+    if (error instanceof DOMException && error.name === 'AbortError') throw error;
+    throw new ApiError(offlineMessage, 'offline');
+  }
+}
+
+async function parse<T>(response: Response): Promise<T> {
+  if (response.ok) {
+    if (response.status === 204) return undefined as T;
+    return (await response.json()) as T;
+  }
+  throw await toApiError(response);
+}
+
+interface ServerErrorBody {
+  statusCode?: number;
+  error?: string;
+  message?: string | string[];
+  fields?: FieldProblem[];
+}
+
+async function toApiError(response: Response): Promise<ApiError> {
+  let body: ServerErrorBody = {};
+  try {
+    body = (await response.json()) as ServerErrorBody;
+  } catch {
+    // Not JSON (e.g. a proxy's error page): fall back to the status line.
+  }
+  const message = Array.isArray(body.message) ? body.message.join('; ') : body.message;
+  return new ApiError(
+    message || body.error || fallbackMessage(response.status),
+    'http',
+    response.status,
+    Array.isArray(body.fields) ? body.fields : [],
+  );
+}
+
+function fallbackMessage(status: number): string {
+  if (status === 429) return 'Too many attempts. Please wait a moment and try again.';
+  if (status >= 500) return 'The server ran into a problem. Please try again shortly.';
+  if (status === 404) return 'Not found.';
+  if (status === 403) return 'You do not have access to this.';
+  return `The request failed (${status}).`;
+}

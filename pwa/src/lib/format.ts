@@ -1,0 +1,26 @@
+const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+const calendarFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+const countFormat = new Intl.NumberFormat('en-GB');
+
+/**
+ * A calendar date such as a field start ("2026-11-16" or "2026-11-16T00:00:00.000Z") →
+ * "16 Nov 2026", the same day in every time zone. Anything unreadable is shown as given.
+ */
+export function formatCalendarDate(value: string | null | undefined): string {
+  if (!value) return '—';
+  const day = /^(\d{4})-(\d{2})-(\d{2})/.exec(value);
+  if (!day) return value;
+  const date = new Date(Date.UTC(Number(day[1]), Number(day[2]) - 1, Number(day[3])));
+  return Number.isNaN(date.getTime()) ? value : calendarFormat.format(date);
+}
+
+/** A moment (ISO timestamp) → its day in the viewer's time zone, e.g. "2 Dec 2026". */
+export function formatDate(value: string | null | undefined): string {
+  if (!value) return '—';
+  const date = new Date(value);
+  return Number.isNaN(date.getTime()) ? value : dateFormat.format(date);
+}
+
+export function formatCount(value: number): string {
+  return countFormat.format(value);
+}

@@ -1,0 +1,33 @@
+import 'fake-indexeddb/auto';
+import '@testing-library/jest-dom/vitest';
+import { cleanup } from '@testing-library/react';
+import { afterEach, beforeEach, vi } from 'vitest';
+import { db } from '../db/plumbline-db';
+
+// jsdom has no matchMedia; Ionic and the shell ask it about screen width (phone layout here).
+if (!window.matchMedia) {
+  Object.defineProperty(window, 'matchMedia', {
+    writable: true,
+    value: (query: string) => ({
+      matches: false,
+      media: query,
+      onchange: null,
+      addListener: () => {},
+      removeListener: () => {},
+      addEventListener: () => {},
+      removeEventListener: () => {},
+      dispatchEvent: () => false,
+    }),
+  });
+}
+
+beforeEach(async () => {
+  await Promise.all(db.tables.map((table) => table.clear()));
+  window.history.replaceState(null, '', '/');
+});
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+  vi.restoreAllMocks();
+});
