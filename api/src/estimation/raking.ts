@@ -97,12 +97,17 @@ export function rake(
 
   const weights = initialWeights(cells, p.n);
   const bounded = cap < Infinity || floor > 0;
-  let error = maxError(p, weights);
+  let error = maxError(p, weights).error;
   let iterations = 0;
+  let stalled = 0;
   while (error > tolerance && iterations < maxIterations) {
     for (let v = 0; v < p.level.length; v++) adjustVariable(p, v, weights, floor, cap, bounded);
     iterations++;
-    error = maxError(p, weights);
+    const previous = error;
+    error = maxError(p, weights).error;
+    // With bounds, sweeps that no longer move the worst margin mean the bounds cannot all hold.
+    stalled = bounded && error > tolerance && Math.abs(previous - error) <= 1e-12 * previous ? stalled + 1 : 0;
+    if (stalled >= 5) throw infeasibleTogether(p, targets, weights, cap, floor);
   }
   normaliseMean(weights, p.counts, p.n);
   return {
@@ -262,14 +267,28 @@ function boundedFactor(
   return free > 0 ? (target - fixed) / free : f;
 }
 
-function maxError(p: Prepared, weights: Float64Array): number {
-  let worst = 0;
+function maxError(p: Prepared, weights: Float64Array): { error: number; variable: number; category: number } {
+  const worst = { error: 0, variable: 0, category: 0 };
   for (let v = 0; v < p.level.length; v++) {
     const totals = categoryTotals(p, v, weights);
     const shares = p.targetShares[v] as number[];
-    totals.forEach((t, i) => (worst = Math.max(worst, Math.abs(t / p.n - (shares[i] as number)))));
+    totals.forEach((t, i) => {
+      const error = Math.abs(t / p.n - (shares[i] as number));
+      if (error > worst.error) Object.assign(worst, { error, variable: v, category: i });
+    });
   }
   return worst;
+}
+
+function infeasibleTogether(
+  p: Prepared, targets: readonly MarginTarget[], weights: Float64Array, cap: number, floor: number,
+): EstimationInputError {
+  const worst = maxError(p, weights);
+  const t = targets[worst.variable];
+  return new EstimationInputError(
+    `cap ${cap} and floor ${floor} are infeasible together: no weights within them meet every target ` +
+      `(variable ${t?.variable} category "${t?.shares[worst.category]?.category}" stays ${worst.error.toPrecision(3)} off its share)`,
+  );
 }
 
 function normaliseMean(weights: Float64Array, counts: Float64Array, n: number): void {
