@@ -54,6 +54,16 @@ describe('plumbline weight', () => {
     expect(report.margins[0]).toMatchObject({ variable: 'age', category: 'young', target: 0.4, unweighted: 0.4 });
   });
 
+  it('reads and writes quoted fields (commas inside a category) through the CSV parser', () => {
+    const quoted = 'id,age,region\n1,young,"Vale, north"\n2,old,"Vale, north"\n3,old,Mardon\n4,young,Mardon\n';
+    const result = weigh(quoted, 'variable,category,share\nage,young,1\nage,old,1\nregion,"Vale, north",1\nregion,Mardon,3\n');
+    expect(result.code).toBe(0);
+    const lines = readFileSync(path('out.csv'), 'utf8').trim().split('\n');
+    expect(lines[0]).toBe('id,age,region,weight');
+    expect(lines[1]).toMatch(/^1,young,"Vale, north",0\.5$/);
+    expect(lines[3]).toMatch(/^3,old,Mardon,1\.5$/);
+  });
+
   it('reports non-convergence as a result, not an error', () => {
     const result = weigh(DATA, TARGETS.replace('young,40', 'young,10'), '--max-iterations', '1', '--tolerance', '1e-12');
     expect(result.code).toBe(0);
