@@ -30,8 +30,8 @@ cat(format(c(plogis(centre), plogis(centre - z * se), plogis(centre + z * se), c
 `, dir);
     const [factor, lower, upper, weighted] = out.trim().split('\n').map(Number);
     expect(Math.abs((outcome.impliedBiasFactor as number) - (factor as number))).toBeLessThan(1e-9);
-    expect(Math.abs((outcome.impliedBiasFactorInterval[0] as number) - (lower as number))).toBeLessThan(1e-9);
-    expect(Math.abs((outcome.impliedBiasFactorInterval[1] as number) - (upper as number))).toBeLessThan(1e-9);
+    expect(Math.abs(((outcome.impliedBiasFactorInterval as number[])[0] as number) - (lower as number))).toBeLessThan(1e-9);
+    expect(Math.abs(((outcome.impliedBiasFactorInterval as number[])[1] as number) - (upper as number))).toBeLessThan(1e-9);
     expect(Math.abs((outcome.weighted as number) - (weighted as number))).toBeLessThan(1e-9);
   });
 
@@ -42,6 +42,6 @@ cat(format(c(plogis(centre), plogis(centre - z * se), plogis(centre + z * se), c
     // Kish (1965): deff = n·Σw² / (Σw)², computed here from the output file by hand.
     const deff = (n * w.reduce((s, x) => s + x * x, 0)) / w.reduce((s, x) => s + x, 0) ** 2;
     expect(result.json.designEffect as number).toBeCloseTo(deff, 10);
-    expect(outcome.marginOfError as number).toBeCloseTo(1.96 * Math.sqrt((deff * outcome.weighted * (1 - outcome.weighted)) / n), 10);
+    expect(outcome.marginOfError as number).toBeCloseTo(1.96 * Math.sqrt((deff * (outcome.weighted as number) * (1 - (outcome.weighted as number))) / n), 10);
   });
 });
