@@ -1,0 +1,28 @@
+import { CliInputError } from './errors.js';
+
+const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+/** A decimal number written in plain or scientific notation; anything else is null. */
+export function parseNumber(text: string): number | null {
+  const t = text.trim();
+  return NUMBER.test(t) ? Number(t) : null;
+}
+
+export function numberOption(value: string | undefined, name: string, check: (x: number) => boolean, rule: string): number | undefined {
+  if (value === undefined) return undefined;
+  const x = parseNumber(value);
+  if (x === null || !check(x)) throw new CliInputError(`--${name} "${value}" is not valid: it must be ${rule}`);
+  return x;
+}
+
+export function integerOption(value: string | undefined, name: string, min: number): number | undefined {
+  return numberOption(value, name, (x) => Number.isInteger(x) && x >= min, `a whole number of at least ${min}`);
+}
+
+export function required<T>(value: T | undefined, name: string): T {
+  if (value === undefined) throw new CliInputError(`--${name} is required`);
+  return value;
+}
+
+/** Short name of a file for messages: the path as the user typed it. */
+export const quote = (s: string): string => JSON.stringify(s);

@@ -1,0 +1,187 @@
+import { parseArgs } from 'node:util';
+import { impliedBiasFactor } from '../estimation/bias-factor.js';
+import { kishDesignEffect, marginOfError } from '../estimation/design-effect.js';
+import { EstimationInputError } from '../estimation/errors.js';
+import { rake, type RakingCell } from '../estimation/raking.js';
+import { readCsv, writeCsvAtomic, writeTextAtomic, type CsvTable } from './csv-files.js';
+import { CliInputError } from './errors.js';
+import { readTargets, type TargetsFile } from './targets-file.js';
+import { integerOption, numberOption, parseNumber, required } from './values.js';
+
+export const WEIGHT_USAGE =
+  'plumbline weight --data FILE.csv --targets FILE.csv --out FILE.csv [--outcome COLUMN] [--base-weight COLUMN] ' +
+  '[--max-iterations N] [--tolerance T] [--cap C] [--floor F]';
+
+interface Cells {
+  cells: (RakingCell & { successes: number })[];
+  /** Cell index of each data record. */
+  cellOf: Int32Array;
+}
+
+/** Rakes a data file to the targets file and writes it back with a weight column. */
+export function weightCommand(args: string[]): object {
+  const { values } = parseArgs({
+    args,
+    strict: true,
+    options: {
+      data: { type: 'string' }, targets: { type: 'string' }, out: { type: 'string' },
+      outcome: { type: 'string' }, 'base-weight': { type: 'string' },
+      'max-iterations': { type: 'string' }, tolerance: { type: 'string' },
+      cap: { type: 'string' }, floor: { type: 'string' },
+    },
+  });
+  const out = required(values.out, 'out');
+  const options = {
+    maxIterations: integerOption(values['max-iterations'], 'max-iterations', 1),
+    tolerance: numberOption(values.tolerance, 'tolerance', (x) => x > 0, 'a number above 0'),
+    cap: numberOption(values.cap, 'cap', (x) => x >= 1, 'a number of at least 1 (weights have mean 1)'),
+    floor: numberOption(values.floor, 'floor', (x) => x >= 0 && x <= 1, 'a number between 0 and 1 (weights have mean 1)'),
+  };
+  const targets = readTargets(required(values.targets, 'targets'));
+  const data = readCsv(required(values.data, 'data'));
+  checkColumns(data, targets, values.outcome, values['base-weight']);
+  const { cells, cellOf } = buildCells(data, targets, values.outcome, values['base-weight']);
+  checkTargetsHaveRespondents(targets, cells, data.file);
+
+  let result;
+  try {
+    result = rake(cells, targets.targets, options);
+  } catch (error) {
+    if (error instanceof EstimationInputError) throw new CliInputError(error.message);
+    throw error;
+  }
+  const weights = result.weights;
+  const weightOf = (i: number) => weights[cellOf[i] as number] as number;
+  if (data.rawLines) {
+    // No quoted fields: each input line is written back unchanged with its weight appended.
+    const { header, records } = data.rawLines;
+    writeTextAtomic(out, `${header},weight\n${records.map((line, i) => `${line},${weightOf(i)}`).join('\n')}\n`);
+  } else {
+    writeCsvAtomic(out, [...data.header, 'weight'], Array.from({ length: data.rowCount }, (_, i) => [...data.row(i), weightOf(i)]));
+  }
+
+  const counts = cells.map((c) => c.count);
+  const deff = kishDesignEffect(weights, counts);
+  const report: Record<string, unknown> = {
+    converged: result.converged,
+    iterations: result.iterations,
+    n: deff.n,
+    designEffect: deff.designEffect,
+    effectiveSampleSize: deff.effectiveSampleSize,
+    weightMin: weights.reduce((a, w, j) => ((counts[j] as number) > 0 ? Math.min(a, w) : a), Infinity),
+    weightMax: weights.reduce((a, w, j) => ((counts[j] as number) > 0 ? Math.max(a, w) : a), -Infinity),
+    maxMarginError: result.maxMarginError,
+    margins: result.margins,
+  };
+  if (values.outcome !== undefined) {
+    const bias = impliedBiasFactor(cells.map((c, j) => ({ count: c.count, successes: c.successes, weight: weights[j] as number })));
+    report.outcome = {
+      column: values.outcome,
+      unweighted: bias.unweighted,
+      weighted: bias.weighted,
+      marginOfError: marginOfError(bias.weighted, deff.n, deff.designEffect),
+      impliedBiasFactor: bias.factor,
+      impliedBiasFactorInterval: bias.lower === null ? null : [bias.lower, bias.upper],
+    };
+  }
+  return report;
+}
+
+function checkColumns(data: CsvTable, targets: TargetsFile, outcome?: string, baseWeight?: string): void {
+  const has = new Set(data.header);
+  for (const t of targets.targets) {
+    if (!has.has(t.variable)) {
+      const line = targets.lineOf(t.variable, t.shares[0]?.category ?? '');
+      throw new CliInputError(`${data.file}: line 1: no column "${t.variable}" (variable in ${targets.file} line ${line})`);
+    }
+  }
+  if (outcome !== undefined && !has.has(outcome)) throw new CliInputError(`${data.file}: line 1: no column "${outcome}" (--outcome)`);
+  if (baseWeight !== undefined && !has.has(baseWeight)) {
+    throw new CliInputError(`${data.file}: line 1: no column "${baseWeight}" (--base-weight)`);
+  }
+  if (has.has('weight')) {
+    throw new CliInputError(`${data.file}: line 1: already has a column "weight"; rename it (it can still be the --base-weight)`);
+  }
+}
+
+/**
+ * One counting pass: interviews with the same categories and base weight share a cell.
+ * A cell's key is a number (mixed-radix category indices, then the base weight's index),
+ * so the pass allocates next to nothing per interview.
+ */
+function buildCells(data: CsvTable, targets: TargetsFile, outcome?: string, baseWeight?: string): Cells {
+  const variables = targets.targets.map((t) => ({ name: t.variable, index: new Map(t.shares.map((s, i) => [s.category, i])) }));
+  const columns = targets.targets.map((t) => data.header.indexOf(t.variable));
+  const outcomeAt = outcome === undefined ? -1 : columns.push(data.header.indexOf(outcome)) - 1;
+  const baseAt = baseWeight === undefined ? -1 : columns.push(data.header.indexOf(baseWeight)) - 1;
+  const combinations = variables.reduce((p, v) => p * v.index.size, 1);
+  const baseIndex = new Map<string, number>();
+  const index = new Map<number, number>();
+  const cells: Cells['cells'] = [];
+  const cellOf = new Int32Array(data.rowCount);
+  const values: string[] = new Array(columns.length).fill('');
+  for (let i = 0; i < data.rowCount; i++) {
+    data.pick(i, columns, values);
+    let key = 0;
+    variables.forEach((v, x) => {
+      const value = (values[x] as string).trim();
+      const c = v.index.get(value);
+      if (c === undefined) {
+        throw new CliInputError(`${data.file}: line ${data.line(i)}: variable ${v.name} has category "${value}", which is not in ${targets.file}`);
+      }
+      key = key * v.index.size + c;
+    });
+    let base = 1;
+    if (baseAt >= 0) {
+      const text = values[baseAt] as string;
+      let b = baseIndex.get(text);
+      if (b === undefined) {
+        const parsed = parseNumber(text);
+        if (parsed === null || !(parsed > 0) || !Number.isFinite(parsed)) {
+          throw new CliInputError(`${data.file}: line ${data.line(i)}: base weight ${baseWeight} is "${text}"; expected a number above 0`);
+        }
+        b = baseIndex.size;
+        baseIndex.set(text, b);
+      }
+      base = parseNumber(text) as number;
+      key += combinations * b;
+    }
+    let success = 0;
+    if (outcomeAt >= 0) {
+      const text = (values[outcomeAt] as string).trim();
+      if (text !== '0' && text !== '1') {
+        throw new CliInputError(`${data.file}: line ${data.line(i)}: outcome ${outcome} is "${text}"; expected 0 or 1`);
+      }
+      success = text === '1' ? 1 : 0;
+    }
+    let j = index.get(key);
+    if (j === undefined) {
+      j = cells.length;
+      index.set(key, j);
+      const categories = Object.fromEntries(variables.map((v, x) => [v.name, (values[x] as string).trim()]));
+      cells.push({ categories, count: 0, baseWeight: base, successes: 0 });
+    }
+    const cell = cells[j] as Cells['cells'][number];
+    cell.count++;
+    cell.successes += success;
+    cellOf[i] = j;
+  }
+  return { cells, cellOf };
+}
+
+function checkTargetsHaveRespondents(targets: TargetsFile, cells: Cells['cells'], dataFile: string): void {
+  for (const t of targets.targets) {
+    const counts = new Map<string, number>();
+    for (const c of cells) counts.set(c.categories[t.variable] as string, (counts.get(c.categories[t.variable] as string) ?? 0) + c.count);
+    for (const s of t.shares) {
+      const line = targets.lineOf(t.variable, s.category);
+      const m = counts.get(s.category) ?? 0;
+      if (s.share > 0 && m === 0) {
+        throw new CliInputError(`${targets.file}: line ${line}: variable ${t.variable} category "${s.category}" has a target but no respondents in ${dataFile}`);
+      }
+      if (s.share === 0 && m > 0) {
+        throw new CliInputError(`${targets.file}: line ${line}: variable ${t.variable} category "${s.category}" has a share of 0 but ${m} respondents in ${dataFile}`);
+      }
+    }
+  }
+}
