@@ -51,7 +51,7 @@ ensure_postgres_binaries() {
 
 # The cluster must not run as root: as root we hand it to the `postgres` system user.
 pg_run() {
-  if as_root; then runuser -u postgres -- "$@"; else "$@"; fi
+  if as_root; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 pg_cluster_dir() {

@@ -16,7 +16,8 @@ export function ratesCommand(args: string[]): object {
   const [ic, in_] = [table.header.indexOf('code'), table.header.indexOf('count')];
   const counts: Partial<Record<DispositionCode, number>> = {};
   const lines = new Map<string, number>();
-  table.records.forEach((record, i) => {
+  for (let i = 0; i < table.rowCount; i++) {
+    const record = table.row(i);
     const line = table.line(i);
     const code = (record[ic] ?? '').trim().toUpperCase();
     if (!(DISPOSITION_CODES as readonly string[]).includes(code)) {
@@ -27,7 +28,7 @@ export function ratesCommand(args: string[]): object {
     const count = parseNumber(record[in_] ?? '');
     if (count === null || count < 0) throw new CliInputError(`${file}: line ${line}: count "${record[in_]}" for ${code} is not a non-negative number`);
     counts[code as DispositionCode] = count;
-  });
+  }
   try {
     return outcomeRates(counts, e);
   } catch (error) {

@@ -20,7 +20,8 @@ export function readTargets(file: string): TargetsFile {
   const [iv, ic, is] = [col('variable'), col('category'), col('share')];
   const byVariable = new Map<string, { category: string; share: number }[]>();
   const lines = new Map<string, number>();
-  table.records.forEach((record, i) => {
+  for (let i = 0; i < table.rowCount; i++) {
+    const record = table.row(i);
     const line = table.line(i);
     const variable = (record[iv] ?? '').trim();
     const category = (record[ic] ?? '').trim();
@@ -38,7 +39,7 @@ export function readTargets(file: string): TargetsFile {
     const list = byVariable.get(variable) ?? [];
     list.push({ category, share });
     byVariable.set(variable, list);
-  });
+  }
   for (const [variable, shares] of byVariable) {
     if (shares.every((s) => s.share === 0)) {
       throw new CliInputError(`${file}: line ${lines.get(JSON.stringify([variable, shares[0]?.category]))}: variable ${variable}: all shares are zero`);

@@ -3,7 +3,7 @@ import { impliedBiasFactor } from '../estimation/bias-factor.js';
 import { kishDesignEffect, marginOfError } from '../estimation/design-effect.js';
 import { EstimationInputError } from '../estimation/errors.js';
 import { rake, type RakingCell } from '../estimation/raking.js';
-import { readCsv, writeCsvAtomic, type CsvTable } from './csv-files.js';
+import { readCsv, writeCsvAtomic, writeTextAtomic, type CsvTable } from './csv-files.js';
 import { CliInputError } from './errors.js';
 import { readTargets, type TargetsFile } from './targets-file.js';
 import { integerOption, numberOption, parseNumber, required } from './values.js';
@@ -51,7 +51,14 @@ export function weightCommand(args: string[]): object {
     throw error;
   }
   const weights = result.weights;
-  writeCsvAtomic(out, [...data.header, 'weight'], data.records.map((r, i) => [...r, weights[cellOf[i] as number]]));
+  const weightOf = (i: number) => weights[cellOf[i] as number] as number;
+  if (data.rawLines) {
+    // No quoted fields: each input line is written back unchanged with its weight appended.
+    const { header, records } = data.rawLines;
+    writeTextAtomic(out, `${header},weight\n${records.map((line, i) => `${line},${weightOf(i)}`).join('\n')}\n`);
+  } else {
+    writeCsvAtomic(out, [...data.header, 'weight'], Array.from({ length: data.rowCount }, (_, i) => [...data.row(i), weightOf(i)]));
+  }
 
   const counts = cells.map((c) => c.count);
   const deff = kishDesignEffect(weights, counts);
@@ -97,59 +104,68 @@ function checkColumns(data: CsvTable, targets: TargetsFile, outcome?: string, ba
   }
 }
 
-/** One counting pass: interviews with the same categories and base weight share a cell. */
+/**
+ * One counting pass: interviews with the same categories and base weight share a cell.
+ * A cell's key is a number (mixed-radix category indices, then the base weight's index),
+ * so the pass allocates next to nothing per interview.
+ */
 function buildCells(data: CsvTable, targets: TargetsFile, outcome?: string, baseWeight?: string): Cells {
-  const variables = targets.targets.map((t) => ({
-    name: t.variable,
-    column: data.header.indexOf(t.variable),
-    known: new Set(t.shares.map((s) => s.category)),
-  }));
-  const outcomeColumn = outcome === undefined ? -1 : data.header.indexOf(outcome);
-  const baseColumn = baseWeight === undefined ? -1 : data.header.indexOf(baseWeight);
-  const index = new Map<string, number>();
+  const variables = targets.targets.map((t) => ({ name: t.variable, index: new Map(t.shares.map((s, i) => [s.category, i])) }));
+  const columns = targets.targets.map((t) => data.header.indexOf(t.variable));
+  const outcomeAt = outcome === undefined ? -1 : columns.push(data.header.indexOf(outcome)) - 1;
+  const baseAt = baseWeight === undefined ? -1 : columns.push(data.header.indexOf(baseWeight)) - 1;
+  const combinations = variables.reduce((p, v) => p * v.index.size, 1);
+  const baseIndex = new Map<string, number>();
+  const index = new Map<number, number>();
   const cells: Cells['cells'] = [];
-  const cellOf = new Int32Array(data.records.length);
-  data.records.forEach((record, i) => {
-    const categories: Record<string, string> = {};
-    const parts: string[] = [];
-    for (const v of variables) {
-      const value = (record[v.column] ?? '').trim();
-      if (!v.known.has(value)) {
+  const cellOf = new Int32Array(data.rowCount);
+  const values: string[] = new Array(columns.length).fill('');
+  for (let i = 0; i < data.rowCount; i++) {
+    data.pick(i, columns, values);
+    let key = 0;
+    variables.forEach((v, x) => {
+      const value = (values[x] as string).trim();
+      const c = v.index.get(value);
+      if (c === undefined) {
         throw new CliInputError(`${data.file}: line ${data.line(i)}: variable ${v.name} has category "${value}", which is not in ${targets.file}`);
       }
-      categories[v.name] = value;
-      parts.push(value);
-    }
+      key = key * v.index.size + c;
+    });
     let base = 1;
-    if (baseColumn >= 0) {
-      const text = record[baseColumn] ?? '';
-      const parsed = parseNumber(text);
-      if (parsed === null || !(parsed > 0) || !Number.isFinite(parsed)) {
-        throw new CliInputError(`${data.file}: line ${data.line(i)}: base weight ${baseWeight} is "${text}"; expected a number above 0`);
+    if (baseAt >= 0) {
+      const text = values[baseAt] as string;
+      let b = baseIndex.get(text);
+      if (b === undefined) {
+        const parsed = parseNumber(text);
+        if (parsed === null || !(parsed > 0) || !Number.isFinite(parsed)) {
+          throw new CliInputError(`${data.file}: line ${data.line(i)}: base weight ${baseWeight} is "${text}"; expected a number above 0`);
+        }
+        b = baseIndex.size;
+        baseIndex.set(text, b);
       }
-      base = parsed;
-      parts.push(String(base));
+      base = parseNumber(text) as number;
+      key += combinations * b;
     }
     let success = 0;
-    if (outcomeColumn >= 0) {
-      const text = (record[outcomeColumn] ?? '').trim();
+    if (outcomeAt >= 0) {
+      const text = (values[outcomeAt] as string).trim();
       if (text !== '0' && text !== '1') {
         throw new CliInputError(`${data.file}: line ${data.line(i)}: outcome ${outcome} is "${text}"; expected 0 or 1`);
       }
       success = text === '1' ? 1 : 0;
     }
-    const key = parts.join('\u0000');
     let j = index.get(key);
     if (j === undefined) {
       j = cells.length;
       index.set(key, j);
+      const categories = Object.fromEntries(variables.map((v, x) => [v.name, (values[x] as string).trim()]));
       cells.push({ categories, count: 0, baseWeight: base, successes: 0 });
     }
     const cell = cells[j] as Cells['cells'][number];
     cell.count++;
     cell.successes += success;
     cellOf[i] = j;
-  });
+  }
   return { cells, cellOf };
 }
 

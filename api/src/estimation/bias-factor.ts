@@ -1,4 +1,4 @@
-import jStat from 'jstat';
+import { jStat } from './jstat.js';
 import { EstimationInputError } from './errors.js';
 
 export const logit = (p: number): number => Math.log(p / (1 - p));

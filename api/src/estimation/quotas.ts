@@ -1,5 +1,6 @@
 import { EstimationInputError } from './errors.js';
-import { normaliseShares, type MarginTarget } from './raking.js';
+import { normaliseShares } from './raking-cells.js';
+import type { MarginTarget } from './raking.js';
 
 export interface QuotaCell {
   categories: Record<string, string>;

@@ -1,4 +1,7 @@
 import { EstimationInputError } from './errors.js';
+import { prepare, type Prepared } from './raking-cells.js';
+
+export { normaliseShares } from './raking-cells.js';
 
 /** One category of a quota variable and its population share (any non-negative number; normalised per variable). */
 export interface CategoryShare {
@@ -54,16 +57,6 @@ export interface RakingResult {
   margins: MarginReport[];
 }
 
-interface Prepared {
-  /** level[v][j]: index of cell j's category in variable v. */
-  level: Int32Array[];
-  counts: Float64Array;
-  /** Target total weight per variable and category (shares × n). */
-  targetTotals: Float64Array[];
-  targetShares: number[][];
-  n: number;
-}
-
 /**
  * Raking (iterative proportional fitting) after Deming and Stephan (1940): starting from
  * the base weights, each variable's categories are scaled in turn to their target totals;
@@ -97,12 +90,17 @@ export function rake(
 
   const weights = initialWeights(cells, p.n);
   const bounded = cap < Infinity || floor > 0;
-  let error = maxError(p, weights);
+  let error = maxError(p, weights).error;
   let iterations = 0;
+  let stalled = 0;
   while (error > tolerance && iterations < maxIterations) {
     for (let v = 0; v < p.level.length; v++) adjustVariable(p, v, weights, floor, cap, bounded);
     iterations++;
-    error = maxError(p, weights);
+    const previous = error;
+    error = maxError(p, weights).error;
+    // With bounds, sweeps that no longer move the worst margin mean the bounds cannot all hold.
+    stalled = bounded && error > tolerance && Math.abs(previous - error) <= 1e-12 * previous ? stalled + 1 : 0;
+    if (stalled >= 5) throw infeasibleTogether(p, targets, weights, cap, floor);
   }
   normaliseMean(weights, p.counts, p.n);
   return {
@@ -112,66 +110,6 @@ export function rake(
     weights: Array.from(weights),
     margins: marginReport(p, targets, weights),
   };
-}
-
-function prepare(cells: readonly RakingCell[], targets: readonly MarginTarget[]): Prepared {
-  if (targets.length === 0) throw new EstimationInputError('no raking variables given');
-  if (cells.length === 0) throw new EstimationInputError('no interviews to weight');
-  const seen = new Set<string>();
-  const counts = Float64Array.from(cells, (c, j) => {
-    if (!(Number.isFinite(c.count) && c.count >= 0)) throw new EstimationInputError(`cell ${j}: count must be a non-negative number`);
-    return c.count;
-  });
-  const n = counts.reduce((a, b) => a + b, 0);
-  if (!(n > 0)) throw new EstimationInputError('no interviews to weight');
-  const level: Int32Array[] = [];
-  const targetTotals: Float64Array[] = [];
-  const targetShares: number[][] = [];
-  for (const t of targets) {
-    if (seen.has(t.variable)) throw new EstimationInputError(`variable ${t.variable} is given twice`);
-    seen.add(t.variable);
-    const shares = normaliseShares(t);
-    const index = new Map(t.shares.map((s, i) => [s.category, i]));
-    const lv = new Int32Array(cells.length);
-    const sample = new Float64Array(t.shares.length);
-    cells.forEach((cell, j) => {
-      const category = cell.categories[t.variable];
-      if (category === undefined) throw new EstimationInputError(`variable ${t.variable} is missing from the interviews`);
-      const i = index.get(category);
-      if (i === undefined) throw new EstimationInputError(`variable ${t.variable}: category "${category}" has no target`);
-      lv[j] = i;
-      sample[i] = (sample[i] ?? 0) + (counts[j] ?? 0);
-    });
-    shares.forEach((share, i) => {
-      const category = t.shares[i]?.category ?? '';
-      if (share > 0 && sample[i] === 0) {
-        throw new EstimationInputError(`variable ${t.variable}: category "${category}" has a target but no respondents`);
-      }
-      if (share === 0 && (sample[i] ?? 0) > 0) {
-        throw new EstimationInputError(`variable ${t.variable}: category "${category}" has respondents but a target share of 0`);
-      }
-    });
-    level.push(lv);
-    targetShares.push(shares);
-    targetTotals.push(Float64Array.from(shares, (s) => s * n));
-  }
-  return { level, counts, targetTotals, targetShares, n };
-}
-
-/** Shares of one variable scaled to sum to 1, after checking they are usable. */
-export function normaliseShares(t: MarginTarget): number[] {
-  const categories = new Set<string>();
-  let sum = 0;
-  for (const s of t.shares) {
-    if (categories.has(s.category)) throw new EstimationInputError(`variable ${t.variable}: category "${s.category}" is given twice`);
-    categories.add(s.category);
-    if (!(Number.isFinite(s.share) && s.share >= 0)) {
-      throw new EstimationInputError(`variable ${t.variable}: category "${s.category}" share must be a non-negative number`);
-    }
-    sum += s.share;
-  }
-  if (!(sum > 0)) throw new EstimationInputError(`variable ${t.variable}: all shares are zero`);
-  return t.shares.map((s) => s.share / sum);
 }
 
 function checkBoundsFeasible(p: Prepared, targets: readonly MarginTarget[], cap: number, floor: number): void {
@@ -262,14 +200,28 @@ function boundedFactor(
   return free > 0 ? (target - fixed) / free : f;
 }
 
-function maxError(p: Prepared, weights: Float64Array): number {
-  let worst = 0;
+function maxError(p: Prepared, weights: Float64Array): { error: number; variable: number; category: number } {
+  const worst = { error: 0, variable: 0, category: 0 };
   for (let v = 0; v < p.level.length; v++) {
     const totals = categoryTotals(p, v, weights);
     const shares = p.targetShares[v] as number[];
-    totals.forEach((t, i) => (worst = Math.max(worst, Math.abs(t / p.n - (shares[i] as number)))));
+    totals.forEach((t, i) => {
+      const error = Math.abs(t / p.n - (shares[i] as number));
+      if (error > worst.error) Object.assign(worst, { error, variable: v, category: i });
+    });
   }
   return worst;
+}
+
+function infeasibleTogether(
+  p: Prepared, targets: readonly MarginTarget[], weights: Float64Array, cap: number, floor: number,
+): EstimationInputError {
+  const worst = maxError(p, weights);
+  const t = targets[worst.variable];
+  return new EstimationInputError(
+    `cap ${cap} and floor ${floor} are infeasible together: no weights within them meet every target ` +
+      `(variable ${t?.variable} category "${t?.shares[worst.category]?.category}" stays ${worst.error.toPrecision(3)} off its share)`,
+  );
 }
 
 function normaliseMean(weights: Float64Array, counts: Float64Array, n: number): void {

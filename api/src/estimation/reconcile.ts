@@ -1,4 +1,4 @@
-import jStat from 'jstat';
+import { jStat } from './jstat.js';
 import { chanceOutlierProbability } from './beta-binomial.js';
 import { checkCounts, checkPrior } from './beta-posterior.js';
 import { EstimationInputError } from './errors.js';

@@ -1,0 +1,140 @@
+import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeEach, describe, expect, it } from 'vitest';
+import { run } from './run.js';
+
+const TARGETS = 'variable,category,share\nage,young,40\nage,old,60\nregion,Harrowby,0.5\nregion,Mardon,0.5\n';
+const DATA = 'id,age,region,supports\n1,young,Harrowby,1\n2,old,Harrowby,0\n3,old,Mardon,1\n4,young,Mardon,0\n5,old,Mardon,0\n';
+
+let dir: string;
+const path = (name: string) => join(dir, name);
+
+function plumbline(...args: string[]) {
+  let stdout = '';
+  let stderr = '';
+  const code = run(args, { out: (t) => (stdout += t), err: (t) => (stderr += t) });
+  return { code, stdout, stderr };
+}
+
+function weigh(data: string, targets: string, ...extra: string[]) {
+  writeFileSync(path('data.csv'), data);
+  writeFileSync(path('targets.csv'), targets);
+  return plumbline('weight', '--data', path('data.csv'), '--targets', path('targets.csv'), '--out', path('out.csv'), ...extra);
+}
+
+/** Bad input: exit 2, one line on stderr that contains every fragment, and no output file. */
+function expectRejected(result: ReturnType<typeof plumbline>, ...fragments: string[]) {
+  expect(result.code).toBe(2);
+  expect(result.stdout).toBe('');
+  expect(result.stderr.trim().split('\n')).toHaveLength(1);
+  for (const f of fragments) expect(result.stderr).toContain(f);
+  expect(existsSync(path('out.csv'))).toBe(false);
+}
+
+beforeEach(() => {
+  dir = mkdtempSync(join(tmpdir(), 'plumbline-cli-'));
+});
+
+describe('plumbline weight', () => {
+  it('writes every input column in order plus a weight column with mean 1, and reports the balance', () => {
+    const result = weigh(DATA, TARGETS, '--outcome', 'supports');
+    expect(result.code).toBe(0);
+    const report = JSON.parse(result.stdout);
+    expect(report.converged).toBe(true);
+    expect(report.n).toBe(5);
+    expect(report.maxMarginError).toBeLessThanOrEqual(1e-6);
+    expect(Object.keys(report.outcome)).toEqual(['column', 'unweighted', 'weighted', 'marginOfError', 'impliedBiasFactor', 'impliedBiasFactorInterval']);
+    const [header, ...rows] = readFileSync(path('out.csv'), 'utf8').trim().split('\n');
+    expect(header).toBe('id,age,region,supports,weight');
+    expect(rows.map((r) => r.split(',').slice(0, 4).join(','))).toEqual(DATA.trim().split('\n').slice(1));
+    const weights = rows.map((r) => Number(r.split(',')[4]));
+    expect(weights.reduce((a, b) => a + b, 0) / weights.length).toBeCloseTo(1, 12);
+    // Young share 2/5 in the sample equals its target 40%, so each group keeps its total.
+    expect(report.margins[0]).toMatchObject({ variable: 'age', category: 'young', target: 0.4, unweighted: 0.4 });
+  });
+
+  it('reads and writes quoted fields (commas inside a category) through the CSV parser', () => {
+    const quoted = 'id,age,region\n1,young,"Vale, north"\n2,old,"Vale, north"\n3,old,Mardon\n4,young,Mardon\n';
+    const result = weigh(quoted, 'variable,category,share\nage,young,1\nage,old,1\nregion,"Vale, north",1\nregion,Mardon,3\n');
+    expect(result.code).toBe(0);
+    const lines = readFileSync(path('out.csv'), 'utf8').trim().split('\n');
+    expect(lines[0]).toBe('id,age,region,weight');
+    expect(lines[1]).toMatch(/^1,young,"Vale, north",0\.5$/);
+    expect(lines[3]).toMatch(/^3,old,Mardon,1\.5$/);
+  });
+
+  it('reports non-convergence as a result, not an error', () => {
+    const result = weigh(DATA, TARGETS.replace('young,40', 'young,10'), '--max-iterations', '1', '--tolerance', '1e-12');
+    expect(result.code).toBe(0);
+    const report = JSON.parse(result.stdout);
+    expect(report.converged).toBe(false);
+    expect(report.iterations).toBe(1);
+    expect(report.maxMarginError).toBeGreaterThan(1e-12);
+    expect(existsSync(path('out.csv'))).toBe(true);
+  });
+
+  it('rejects an unknown category in the data, naming file, line, variable and category', () => {
+    expectRejected(weigh(DATA.replace('3,old,Mardon', '3,old,Mardn'), TARGETS), 'data.csv', 'line 4', 'region', '"Mardn"');
+  });
+
+  it('rejects a target category with no respondents, naming the targets line', () => {
+    expectRejected(weigh(DATA, `${TARGETS}region,Tarnfield,0.2\n`), 'targets.csv', 'line 6', 'region', '"Tarnfield"', 'no respondents');
+  });
+
+  it('rejects a variable missing from the data', () => {
+    expectRejected(weigh(DATA, `${TARGETS}education,degree,1\n`), 'data.csv', 'line 1', '"education"');
+  });
+
+  it('rejects negative, non-numeric and all-zero shares', () => {
+    expectRejected(weigh(DATA, TARGETS.replace('old,60', 'old,-60')), 'targets.csv', 'line 3', 'age', '"old"', '"-60"');
+    expectRejected(weigh(DATA, TARGETS.replace('old,60', 'old,sixty')), 'targets.csv', 'line 3', '"sixty"');
+    expectRejected(weigh(DATA, TARGETS.replace('young,40', 'young,0').replace('old,60', 'old,0')), 'targets.csv', 'age', 'all shares are zero');
+  });
+
+  it('rejects missing header columns and empty files', () => {
+    expectRejected(weigh(DATA, TARGETS.replace('variable,category,share', 'variable,category,pct')), 'targets.csv', 'line 1', 'missing column "share"');
+    expectRejected(weigh('', TARGETS), 'data.csv', 'empty');
+    expectRejected(weigh(DATA, ''), 'targets.csv', 'empty');
+    expectRejected(weigh('id,age,region\n', TARGETS), 'data.csv', 'no rows');
+  });
+
+  it('rejects an outcome column that is not 0/1', () => {
+    expectRejected(weigh(DATA.replace('5,old,Mardon,0', '5,old,Mardon,yes'), TARGETS, '--outcome', 'supports'), 'data.csv', 'line 6', 'supports', '"yes"');
+    expectRejected(weigh(DATA, TARGETS, '--outcome', 'voted'), 'data.csv', '"voted"');
+  });
+
+  it('rejects infeasible cap and floor, naming the category that cannot be met', () => {
+    const skewed = TARGETS.replace('young,40', 'young,90').replace('old,60', 'old,10');
+    expectRejected(weigh(DATA, skewed, '--cap', '1.5'), 'cap 1.5', 'age', '"young"');
+    // Each category alone could be met, but not all together: young/Harrowby would need a weight of at least 1.65.
+    const together = TARGETS.replace('young,40', 'young,55').replace('old,60', 'old,45');
+    expectRejected(weigh(DATA, together, '--cap', '1.5', '--floor', '0.7'), 'cap 1.5 and floor 0.7', 'infeasible together');
+    expectRejected(weigh(DATA, TARGETS, '--floor', '1.2'), '--floor');
+    expectRejected(weigh(DATA, TARGETS, '--cap', '0.8'), '--cap');
+  });
+
+  it('rejects rows with the wrong number of fields and unknown options', () => {
+    expectRejected(weigh(`${DATA}6,old\n`, TARGETS), 'data.csv', 'line 7');
+    expectRejected(weigh(DATA, TARGETS, '--trim', '3'), "'--trim'");
+  });
+
+  it('leaves an existing output file untouched when the input is bad', () => {
+    writeFileSync(path('out.csv'), 'earlier result\n');
+    writeFileSync(path('data.csv'), DATA.replace('Harrowby', 'Harowby'));
+    writeFileSync(path('targets.csv'), TARGETS);
+    const result = plumbline('weight', '--data', path('data.csv'), '--targets', path('targets.csv'), '--out', path('out.csv'));
+    expect(result.code).toBe(2);
+    expect(readFileSync(path('out.csv'), 'utf8')).toBe('earlier result\n');
+  });
+
+  it('keeps the weights within cap and floor when they are feasible', () => {
+    const result = weigh(DATA, TARGETS.replace('young,40', 'young,55').replace('old,60', 'old,45'), '--cap', '1.56', '--floor', '0.6');
+    expect(result.code).toBe(0);
+    const report = JSON.parse(result.stdout);
+    expect(report.converged).toBe(true);
+    expect(report.weightMax).toBeLessThanOrEqual(1.56 + 1e-9);
+    expect(report.weightMin).toBeGreaterThanOrEqual(0.6 - 1e-9);
+    // Without bounds these targets need a weight of 1.587 for young/Harrowby, so the cap binds.
+  });
+});
