@@ -94,7 +94,7 @@ export class BalanceService {
     const problem = this.weightingProblem(targets, base.margins, n);
     if (problem) return { ...base, weightingProblem: problem };
     try {
-      const summary = summariseWeighting(cells, targets, {}, yes > 0 && yes < n);
+      const summary = summariseWeighting(cells, targets);
       return {
         ...base,
         converged: summary.converged,
