@@ -17,6 +17,7 @@ import { TodayPage } from '../features/fieldwork/pages/today-page';
 import { CellsPage } from '../features/fieldwork/pages/cells-page';
 import { OutboxPage } from '../features/outbox/pages/outbox-page';
 import { QuotaBoardPage } from '../features/quotas/pages/quota-board-page';
+import { ProjectQuotaBoardPage } from '../features/quotas/pages/project-quota-board-page';
 import { ReviewQueuePage } from '../features/review/pages/review-queue-page';
 import { InterviewersPage } from '../features/team/pages/interviewers-page';
 import { ProjectsPage } from '../features/projects/pages/projects-page';
@@ -31,6 +32,8 @@ export interface NavItem {
   label: string;
   icon: string;
   element: ReactElement;
+  /** Pages reached from this section (e.g. one project), not listed in the navigation. */
+  subPages?: { path: string; element: ReactElement }[];
 }
 
 /** Each role's own area: its home is the first item. A path outside it sends the person home. */
@@ -46,7 +49,13 @@ export const roleNavigation: Record<Role, NavItem[]> = {
     { path: '/supervisor/interviewers', label: 'Interviewers', icon: peopleOutline, element: <InterviewersPage /> },
   ],
   lead: [
-    { path: '/lead', label: 'Projects', icon: folderOpenOutline, element: <ProjectsPage /> },
+    {
+      path: '/lead',
+      label: 'Projects',
+      icon: folderOpenOutline,
+      element: <ProjectsPage />,
+      subPages: [{ path: '/lead/projects/:projectId/quota-board', element: <ProjectQuotaBoardPage /> }],
+    },
     { path: '/lead/balance', label: 'Balance', icon: scaleOutline, element: <BalancePage /> },
     { path: '/lead/benchmarks', label: 'Benchmarks', icon: gitCompareOutline, element: <BenchmarksPage /> },
     { path: '/lead/delivery', label: 'Delivery', icon: documentTextOutline, element: <DeliveryPage /> },

@@ -1,5 +1,5 @@
 import { formatCalendarDate, formatCount } from '../../../lib/format';
-import type { Project } from '../api/get-projects';
+import type { Project } from '../../../lib/projects/get-projects';
 
 const statusWords: Record<string, string> = {
   draft: 'Being set up',

@@ -1,7 +1,7 @@
 import { PageFrame } from '../../../components/page-frame';
 import { QueryView } from '../../../components/query-view';
 import { EmptyPanel } from '../../../components/state-panels';
-import { useProjects } from '../api/get-projects';
+import { useProjects } from '../../../lib/projects/get-projects';
 import { ProjectList } from '../components/project-list';
 
 export function ProjectsPage() {
