@@ -24,7 +24,7 @@ import { ProjectsPage } from '../features/projects/pages/projects-page';
 import { BalancePage } from '../features/balance/pages/balance-page';
 import { BenchmarksPage } from '../features/benchmarks/pages/benchmarks-page';
 import { DeliveryPage } from '../features/delivery/pages/delivery-page';
-import { ProgressPage } from '../features/progress/pages/progress-page';
+import { ProgressPage } from '../features/balance/pages/progress-page';
 import { PeoplePage } from '../features/people/pages/people-page';
 
 export interface NavItem {
