@@ -21,6 +21,8 @@ import { ProjectQuotaBoardPage } from '../features/quotas/pages/project-quota-bo
 import { ReviewQueuePage } from '../features/review/pages/review-queue-page';
 import { InterviewersPage } from '../features/team/pages/interviewers-page';
 import { ProjectsPage } from '../features/projects/pages/projects-page';
+import { NewProjectPage } from '../features/projects/pages/new-project-page';
+import { ProjectPage } from '../features/projects/pages/project-page';
 import { BalancePage } from '../features/balance/pages/balance-page';
 import { BenchmarksPage } from '../features/benchmarks/pages/benchmarks-page';
 import { DeliveryPage } from '../features/delivery/pages/delivery-page';
@@ -54,7 +56,11 @@ export const roleNavigation: Record<Role, NavItem[]> = {
       label: 'Projects',
       icon: folderOpenOutline,
       element: <ProjectsPage />,
-      subPages: [{ path: '/lead/projects/:projectId/quota-board', element: <ProjectQuotaBoardPage /> }],
+      subPages: [
+        { path: '/lead/projects/new', element: <NewProjectPage /> },
+        { path: '/lead/projects/:projectId', element: <ProjectPage /> },
+        { path: '/lead/projects/:projectId/quota-board', element: <ProjectQuotaBoardPage /> },
+      ],
     },
     { path: '/lead/balance', label: 'Balance', icon: scaleOutline, element: <BalancePage /> },
     { path: '/lead/benchmarks', label: 'Benchmarks', icon: gitCompareOutline, element: <BenchmarksPage /> },

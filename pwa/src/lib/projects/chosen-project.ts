@@ -13,16 +13,21 @@ function readChoice(): string | null {
   }
 }
 
+/** Remember a project as the current one, e.g. when the lead opens its balance. */
+export function rememberProject(id: string): void {
+  try {
+    window.localStorage.setItem(storageKey, id);
+  } catch {
+    // Private mode or full storage: nothing to remember.
+  }
+}
+
 /** The remembered project when it is still in the list, otherwise the first one. */
 export function useChosenProject(projects: Project[]): [Project | undefined, (id: string) => void] {
   const [chosenId, setChosenId] = useState<string | null>(readChoice);
   const choose = useCallback((id: string) => {
     setChosenId(id);
-    try {
-      window.localStorage.setItem(storageKey, id);
-    } catch {
-      // Private mode or full storage: the choice lasts for this visit only.
-    }
+    rememberProject(id);
   }, []);
   const chosen = projects.find((p) => p.id === chosenId) ?? projects[0];
   return [chosen, choose];
