@@ -56,7 +56,7 @@ describe("supervisor's quota board on a desktop", () => {
     expect(rowLabels()).toEqual(['region: Kestle Vale', 'region: Mardon', 'region: Harrowby', 'education: basic']);
 
     await user.selectOptions(screen.getByLabelText('Status'), 'Open');
-    expect(rowLabels()).toEqual(['education: basic', 'region: Harrowby']);
+    expect(rowLabels()).toEqual(['region: Harrowby', 'education: basic']);
     expect(screen.getByText('2 of 4 cells')).toBeInTheDocument();
 
     await user.selectOptions(screen.getByLabelText('Status'), 'All cells');
