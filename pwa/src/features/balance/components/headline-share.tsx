@@ -13,7 +13,7 @@ export function HeadlineShare({ balance }: { balance: Balance }) {
   return (
     <>
       <p className="pl-headline-question">“{balance.headlineQuestion}”</p>
-      <dl className="pl-figures" aria-label="Headline share">
+      <dl className="pl-figures" aria-label="Headline figures">
         <div>
           <dt>Yes, unweighted</dt>
           <dd className="pl-figure">{formatPercent(outcome.unweighted)}</dd>
