@@ -8,7 +8,7 @@ import { onWideScreen } from '../../../test/wide-screen';
 const project = { id: 'p1', name: 'Vellmoor tram extension', topic: '', fieldStart: '2026-11-16', fieldEnd: '2026-12-06', targetSize: 1200, status: 'fieldwork' };
 
 function cell(id: string, label: string, target: number, achieved: number, status: string) {
-  return { id, kind: 'margin', label, categoryIds: [], target, achieved, overQuota: 0, remaining: Math.max(0, target - achieved), fillRate: achieved / target, status, closedAt: null };
+  return { id, kind: 'margin', label, categoryIds: [], target, achieved, overQuota: 0, remaining: Math.max(0, target - achieved), fillRate: achieved / target, status, closedAt: null as string | null };
 }
 
 const cells = [
