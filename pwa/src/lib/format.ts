@@ -24,3 +24,14 @@ export function formatDate(value: string | null | undefined): string {
 export function formatCount(value: number): string {
   return countFormat.format(value);
 }
+
+const momentFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
+const clockFormat = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit' });
+
+/** A moment (ISO timestamp) → "14:05" today, "3 Dec, 14:05" on another day, in the viewer's time zone. */
+export function formatMoment(value: string | null | undefined, now = new Date()): string {
+  if (!value) return '—';
+  const date = new Date(value);
+  if (Number.isNaN(date.getTime())) return value;
+  return date.toDateString() === now.toDateString() ? `today ${clockFormat.format(date)}` : momentFormat.format(date);
+}
