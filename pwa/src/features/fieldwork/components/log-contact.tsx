@@ -2,7 +2,7 @@
 // look at their cells before the interview proper, then the headline answer. startedAt is
 // the moment this screen opened, endedAt the moment of saving; the record goes to the
 // device's outbox first (sync/log-contact), whatever the network.
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import type { Disposition, FieldProject } from '../../../db/plumbline-db';
 import { dispositionWords } from '../../../lib/fieldwork-words';
 import { respondentCells } from '../../../sync/cell-status';
@@ -32,6 +32,13 @@ export function LogContact({ userId, project, status, onSaved, onCancel }: LogCo
   const [saving, setSaving] = useState(false);
   const [problem, setProblem] = useState<string>();
   const variables = status?.variables ?? [];
+  const top = useRef<HTMLDivElement>(null);
+
+  // Each step starts at the top of the screen, with the project name in view.
+  useEffect(() => {
+    const content = top.current?.closest('ion-content') as (HTMLElement & { scrollToTop?: (ms?: number) => Promise<void> }) | null;
+    void content?.scrollToTop?.(0);
+  }, [step]);
 
   const theirCells = useMemo(
     () => respondentCells(status?.cells ?? [], Object.values(categories)),
@@ -60,7 +67,7 @@ export function LogContact({ userId, project, status, onSaved, onCancel }: LogCo
   }
 
   return (
-    <div className="pl-log">
+    <div className="pl-log" ref={top}>
       <div className="pl-log-head">
         <p className="pl-log-project">{project.name}</p>
         <button type="button" className="pl-button pl-button-quiet" onClick={onCancel}>

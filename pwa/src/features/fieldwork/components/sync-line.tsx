@@ -10,8 +10,8 @@ export function SyncLine({ waiting, lastSync }: { waiting: number; lastSync: str
       <Link to="/interviewer/outbox" className="pl-sync-link">
         <span className="pl-figure">{formatCount(waiting)}</span> {waiting === 1 ? 'contact' : 'contacts'} waiting in the outbox
       </Link>
-      <span className="pl-muted">
-        {progress.running ? ' · syncing…' : ` · last sync ${lastSync ? formatMoment(lastSync) : 'not yet'}`}
+      <span className="pl-muted pl-small">
+        {progress.running ? 'Syncing…' : `Last sync ${lastSync ? formatMoment(lastSync) : 'not yet on this device'}`}
       </span>
     </p>
   );

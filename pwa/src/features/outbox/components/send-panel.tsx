@@ -24,7 +24,11 @@ export function SendPanel({ waiting, lastSync, online }: SendPanelProps) {
       {progress.running ? (
         <div className="pl-send-progress" role="status">
           <span>
-            {progress.total > 0 ? `Sending ${formatCount(progress.sent)} of ${formatCount(progress.total)}…` : 'Syncing…'}
+            {progress.total === 0
+              ? 'Syncing…'
+              : progress.sent < progress.total
+                ? `Sending ${formatCount(progress.sent)} of ${formatCount(progress.total)}…`
+                : `All ${formatCount(progress.total)} sent. Refreshing cell status…`}
           </span>
           {progress.total > 0 ? <progress max={progress.total} value={progress.sent} aria-hidden="true" /> : null}
         </div>
