@@ -24,7 +24,7 @@ export async function readProjects(userId: string): Promise<FieldProject[]> {
 
 /** `undefined` while reading. */
 export function useCachedProjects(userId: string | undefined): FieldProject[] | undefined {
-  return useLiveQuery(async () => (userId ? readProjects(userId) : []), [userId]);
+  return useLiveQuery(async () => (userId ? readProjects(userId) : undefined), [userId]);
 }
 
 export async function saveCells(projectId: string, cells: QuotaCell[], syncedAt: string, variables?: QuotaVariable[]): Promise<void> {
@@ -41,10 +41,12 @@ export async function readCells(projectId: string): Promise<CachedCells | undefi
 /** `undefined` while reading; projects never synced on this device are missing from the record. */
 export function useCachedCells(projectIds: string[]): Record<string, CachedCells> | undefined {
   const key = projectIds.join(',');
-  return useLiveQuery(async () => {
+  const result = useLiveQuery(async () => {
     const rows = await db.cellCache.bulkGet(key ? key.split(',') : []);
-    return Object.fromEntries(rows.filter((row) => row !== undefined).map((row) => [row.projectId, row]));
+    return { key, cells: Object.fromEntries(rows.filter((row) => row !== undefined).map((row) => [row.projectId, row])) };
   }, [key]);
+  // While the projects change, the previous answer would belong to other projects: report "reading".
+  return result?.key === key ? result.cells : undefined;
 }
 
 export async function setLastSync(userId: string, at: string): Promise<void> {
@@ -54,7 +56,7 @@ export async function setLastSync(userId: string, at: string): Promise<void> {
 /** `undefined` while reading; `null` when this interviewer never synced on this device. */
 export function useLastSync(userId: string | undefined): string | null | undefined {
   return useLiveQuery(async () => {
-    if (!userId) return null;
+    if (!userId) return undefined;
     const row = await db.meta.get(lastSyncKey(userId));
     return typeof row?.value === 'string' ? row.value : null;
   }, [userId]);

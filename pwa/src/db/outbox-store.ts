@@ -38,15 +38,15 @@ export async function listWaiting(interviewerId: string): Promise<OutboxEntry[]>
   return (await listOwnEntries(interviewerId)).filter((entry) => !isRejected(entry));
 }
 
-/** `undefined` while reading. */
+/** `undefined` while reading (or while nobody is known to be signed in). */
 export function useOwnEntries(interviewerId: string | undefined): OutboxEntry[] | undefined {
-  return useLiveQuery(async () => (interviewerId ? listOwnEntries(interviewerId) : []), [interviewerId]);
+  return useLiveQuery(async () => (interviewerId ? listOwnEntries(interviewerId) : undefined), [interviewerId]);
 }
 
 /** How many entries on this device belong to someone other than `interviewerId`. */
 export function useOthersCount(interviewerId: string | undefined): number | undefined {
   return useLiveQuery(
-    async () => (interviewerId ? db.outbox.where('interviewerId').notEqual(interviewerId).count() : 0),
+    async () => (interviewerId ? db.outbox.where('interviewerId').notEqual(interviewerId).count() : undefined),
     [interviewerId],
   );
 }
