@@ -108,6 +108,7 @@ describe('interviewer offline at phone size', () => {
     await page.getByRole('heading', { level: 1, name: 'Today' }).waitFor();
     await page.getByRole('link', { name: 'Outbox', exact: true }).click();
     await page.getByText('unsent interviews on this device').waitFor();
+    await page.getByRole('heading', { level: 1, name: 'Today' }).waitFor({ state: 'hidden' });
     const waiting = page.getByRole('list', { name: 'Waiting to be sent' }).getByRole('listitem');
     expect(await waiting.count()).toBe(5);
     expect(await page.locator('.pl-outbox-number').textContent()).toBe('5');
@@ -136,6 +137,13 @@ describe('interviewer offline at phone size', () => {
       await signIn(page, baseUrl, 'interviewer@vellmoor.example');
       await page.getByText('Cells as of the sync').waitFor();
       await screenshot(page, 'interviewer-6-today-closed-cell');
+      await page.getByRole('link', { name: 'Cells', exact: true }).click();
+      await page.getByRole('heading', { level: 1, name: 'Today' }).waitFor({ state: 'hidden' });
+      const closedRow = page.getByRole('region', { name: 'Crossed cells' }).getByRole('listitem').filter({ hasText: '18-24 × sex: female' });
+      expect(await closedRow.textContent()).toContain('Closed');
+      await screenshot(page, 'interviewer-6-cells-page');
+      await page.getByRole('link', { name: 'Today', exact: true }).click();
+      await page.getByRole('heading', { level: 1, name: 'Cells' }).waitFor({ state: 'hidden' });
 
       await logComplete(page, { 'Age band': '18-24', Sex: 'female', Region: 'Harrowby', Education: 'degree' }, 'No');
       const warning = page.getByRole('dialog', { name: 'Interview in a full cell?' });
