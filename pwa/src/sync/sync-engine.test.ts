@@ -106,6 +106,18 @@ describe('sync module', () => {
     expect(readProgress().problems).toEqual(['A project: boom']);
   });
 
+  it('keeps the outbox when the sign-in has expired and cannot be renewed', async () => {
+    api.on('POST', `/api/projects/${tramProject.id}/interviews/sync`, () => problem(401, 'Unauthorized', 'token expired'));
+    api.on('POST', '/api/auth/refresh', () => problem(401, 'Unauthorized', 'refresh token expired'));
+    await db.outbox.add(completeEntry(1, me, who));
+
+    expect(await requestSync()).toBe('signed-out');
+
+    expect(await db.session.count()).toBe(0);
+    expect(await db.outbox.count()).toBe(1);
+    expect(readProgress().problems.join(' ')).toMatch(/stay on this device until you sign in again/);
+  });
+
   it('sends only the signed-in interviewer’s entries and leaves another person’s untouched', async () => {
     serve();
     const mine = completeEntry(1, me, who);
