@@ -28,7 +28,7 @@ export function SendPanel({ waiting, lastSync, online }: SendPanelProps) {
               ? 'Syncing…'
               : progress.sent < progress.total
                 ? `Sending ${formatCount(progress.sent)} of ${formatCount(progress.total)}…`
-                : `All ${formatCount(progress.total)} sent. Refreshing cell status…`}
+                : `${progress.total === 1 ? 'Sent' : `All ${formatCount(progress.total)} sent`}. Refreshing cell status…`}
           </span>
           {progress.total > 0 ? <progress max={progress.total} value={progress.sent} aria-hidden="true" /> : null}
         </div>
