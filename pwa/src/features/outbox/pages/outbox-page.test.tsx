@@ -1,4 +1,4 @@
-import { screen, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it } from 'vitest';
 import { db } from '../../../db/plumbline-db';
@@ -83,8 +83,8 @@ describe('outbox page', () => {
 
     await user.click(screen.getByRole('button', { name: 'Discard…' }));
     await user.click(within(await screen.findByRole('dialog')).getByRole('button', { name: 'Discard' }));
-    expect(await screen.findByText('Nothing is waiting to be sent.')).toBeInTheDocument();
-    expect(screen.queryByText(/Refused by the server/)).not.toBeInTheDocument();
+    await waitFor(() => expect(screen.queryByText(/Refused by the server/)).not.toBeInTheDocument());
+    expect(screen.getByText('Nothing is waiting to be sent.')).toBeInTheDocument();
     expect(await db.outbox.count()).toBe(0);
   });
 });
