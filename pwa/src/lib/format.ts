@@ -52,3 +52,13 @@ export function formatDecimal(value: number | null | undefined, digits = 2): str
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';
   return value.toFixed(digits);
 }
+
+const momentFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
+
+/** A moment (ISO timestamp) → "14:05" today, "3 Dec, 14:05" on another day, in the viewer's time zone. */
+export function formatMoment(value: string | null | undefined, now = new Date()): string {
+  if (!value) return '—';
+  const date = new Date(value);
+  if (Number.isNaN(date.getTime())) return value;
+  return date.toDateString() === now.toDateString() ? `today ${clockFormat.format(date)}` : momentFormat.format(date);
+}
