@@ -21,9 +21,9 @@ cleanup() {
 }
 trap cleanup INT TERM EXIT
 
-npx tsx scripts/migrate.ts || die "migrations failed"
-npx tsx scripts/seed.ts || die "seeding the demo data failed"
 build_all
+npx tsx scripts/migrate.ts || die "migrations failed"
+node api/dist/demo/seed.js || die "seeding the demo data failed"
 
 node api/dist/main.js &
 API_PID=$!

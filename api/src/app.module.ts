@@ -6,6 +6,7 @@ import type { DestinationStream } from 'pino';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AuthModule } from './auth/auth.module.js';
+import { BalanceModule } from './balance/balance.module.js';
 import { AllExceptionsFilter } from './common/filters/http-exception.filter.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
@@ -13,7 +14,9 @@ import type { AppConfig } from './config/config.js';
 import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
+import { InterviewsModule } from './interviews/interviews.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
+import { QuotasModule } from './quotas/quotas.module.js';
 import { UsersModule } from './users/users.module.js';
 
 @Module({})
@@ -41,6 +44,9 @@ export class AppModule {
         AuthModule,
         UsersModule,
         ProjectsModule,
+        QuotasModule,
+        InterviewsModule,
+        BalanceModule,
         ...pwaModules(config),
       ],
       providers: [

@@ -9,6 +9,7 @@ import './app/styles/theme.css';
 import './app/styles/shell.css';
 import './app/styles/pages.css';
 import './app/styles/dialog.css';
+import './app/styles/data.css';
 import { App } from './app/app';
 import { createQueryClient } from './app/query-client';
 import { registerServiceWorker } from './app/register-service-worker';

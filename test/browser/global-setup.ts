@@ -1,12 +1,10 @@
 // Starts the built API (serving the built PWA) on the test database with the demo
 // data seeded, for the browser suite. The bootstrap builds both halves first.
-import { spawn, type ChildProcess } from 'node:child_process';
+import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import knex from 'knex';
 import type { TestProject } from 'vitest/node';
 import { migrateLatest } from '../../scripts/migrate.js';
-import { seedDemo } from '../../scripts/seed.js';
 
 const root = resolve(import.meta.dirname, '../..');
 let server: ChildProcess | undefined;
@@ -20,13 +18,11 @@ declare module 'vitest' {
 export async function setup(project: TestProject): Promise<void> {
   const databaseUrl = process.env.DATABASE_URL;
   if (!databaseUrl || !/_test(\?|$)/.test(databaseUrl)) throw new Error('DATABASE_URL must name a *_test database: run through `npm test`');
-  for (const file of ['api/dist/main.js', 'pwa/dist/index.html']) {
+  for (const file of ['api/dist/main.js', 'api/dist/demo/seed.js', 'pwa/dist/index.html']) {
     if (!existsSync(join(root, file))) throw new Error(`${file} is missing: build first (npm test does)`);
   }
   await migrateLatest(databaseUrl);
-  const db = knex({ client: 'pg', connection: databaseUrl });
-  await seedDemo(db);
-  await db.destroy();
+  execFileSync(process.execPath, [join(root, 'api/dist/demo/seed.js')], { env: process.env, stdio: 'inherit' });
 
   const port = Number(process.env.BROWSER_TEST_PORT ?? 3917);
   const baseUrl = `http://127.0.0.1:${port}`;

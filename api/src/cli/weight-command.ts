@@ -1,8 +1,7 @@
 import { parseArgs } from 'node:util';
-import { impliedBiasFactor } from '../estimation/bias-factor.js';
-import { kishDesignEffect, marginOfError } from '../estimation/design-effect.js';
 import { EstimationInputError } from '../estimation/errors.js';
-import { rake, type RakingCell } from '../estimation/raking.js';
+import type { RakingCell } from '../estimation/raking.js';
+import { summariseWeighting } from '../estimation/weighting-summary.js';
 import { readCsv, writeCsvAtomic, writeTextAtomic, type CsvTable } from './csv-files.js';
 import { CliInputError } from './errors.js';
 import { readTargets, type TargetsFile } from './targets-file.js';
@@ -43,14 +42,14 @@ export function weightCommand(args: string[]): object {
   const { cells, cellOf } = buildCells(data, targets, values.outcome, values['base-weight']);
   checkTargetsHaveRespondents(targets, cells, data.file);
 
-  let result;
+  let summary;
   try {
-    result = rake(cells, targets.targets, options);
+    summary = summariseWeighting(cells, targets.targets, options, values.outcome !== undefined);
   } catch (error) {
     if (error instanceof EstimationInputError) throw new CliInputError(error.message);
     throw error;
   }
-  const weights = result.weights;
+  const weights = summary.weights;
   const weightOf = (i: number) => weights[cellOf[i] as number] as number;
   if (data.rawLines) {
     // No quoted fields: each input line is written back unchanged with its weight appended.
@@ -59,32 +58,8 @@ export function weightCommand(args: string[]): object {
   } else {
     writeCsvAtomic(out, [...data.header, 'weight'], Array.from({ length: data.rowCount }, (_, i) => [...data.row(i), weightOf(i)]));
   }
-
-  const counts = cells.map((c) => c.count);
-  const deff = kishDesignEffect(weights, counts);
-  const report: Record<string, unknown> = {
-    converged: result.converged,
-    iterations: result.iterations,
-    n: deff.n,
-    designEffect: deff.designEffect,
-    effectiveSampleSize: deff.effectiveSampleSize,
-    weightMin: weights.reduce((a, w, j) => ((counts[j] as number) > 0 ? Math.min(a, w) : a), Infinity),
-    weightMax: weights.reduce((a, w, j) => ((counts[j] as number) > 0 ? Math.max(a, w) : a), -Infinity),
-    maxMarginError: result.maxMarginError,
-    margins: result.margins,
-  };
-  if (values.outcome !== undefined) {
-    const bias = impliedBiasFactor(cells.map((c, j) => ({ count: c.count, successes: c.successes, weight: weights[j] as number })));
-    report.outcome = {
-      column: values.outcome,
-      unweighted: bias.unweighted,
-      weighted: bias.weighted,
-      marginOfError: marginOfError(bias.weighted, deff.n, deff.designEffect),
-      impliedBiasFactor: bias.factor,
-      impliedBiasFactorInterval: bias.lower === null ? null : [bias.lower, bias.upper],
-    };
-  }
-  return report;
+  const { weights: _weights, outcome, ...report } = summary;
+  return outcome ? { ...report, outcome: { column: values.outcome, ...outcome } } : report;
 }
 
 function checkColumns(data: CsvTable, targets: TargetsFile, outcome?: string, baseWeight?: string): void {

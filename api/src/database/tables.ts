@@ -40,7 +40,58 @@ export interface ProjectRow {
   field_end: string | null;
   target_size: number;
   status: 'setup' | 'fieldwork' | 'closed';
+  headline_question: string;
+  targets_updated_at: Date | null;
   created_at: Date;
+}
+
+export interface QuotaVariableRow {
+  id: string;
+  project_id: string;
+  name: string;
+  position: number;
+  interlocked: boolean;
+  retired: boolean;
+}
+
+export interface QuotaCategoryRow {
+  id: string;
+  variable_id: string;
+  project_id: string;
+  label: string;
+  position: number;
+  share: number;
+  retired: boolean;
+}
+
+export interface QuotaCellRow {
+  id: string;
+  project_id: string;
+  kind: 'interlocked' | 'margin';
+  category_ids: string[];
+  label: string;
+  position: number;
+  target: number;
+  closed_at: Date | null;
+  closed_by: string | null;
+}
+
+export const DISPOSITIONS = ['complete', 'partial', 'refusal', 'non_contact', 'other', 'not_eligible'] as const;
+export type Disposition = (typeof DISPOSITIONS)[number];
+
+export interface InterviewRow {
+  id: string;
+  project_id: string;
+  interviewer_id: string;
+  disposition: Disposition;
+  category_ids: string[];
+  headline_answer: boolean | null;
+  started_at: Date;
+  ended_at: Date;
+  field_day: string;
+  received_at: Date;
+  over_quota: boolean;
+  review_status: 'pending' | 'approved' | 'rejected';
 }
 
 export interface ProjectMemberRow {
@@ -55,6 +106,15 @@ export interface ThrottleHitRow {
   expires_at: Date;
 }
 
+/** Counted interviews per project and combination of categories (kept by triggers). */
+export interface InterviewCountRow {
+  project_id: string;
+  category_ids: string[];
+  n: number;
+  yes: number;
+  over_quota: number;
+}
+
 declare module 'knex/types/tables.js' {
   interface Tables {
     organisations: OrganisationRow;
@@ -63,5 +123,10 @@ declare module 'knex/types/tables.js' {
     projects: ProjectRow;
     project_members: ProjectMemberRow;
     throttle_hits: ThrottleHitRow;
+    quota_variables: QuotaVariableRow;
+    quota_categories: QuotaCategoryRow;
+    quota_cells: QuotaCellRow;
+    interviews: InterviewRow;
+    interview_counts: InterviewCountRow;
   }
 }

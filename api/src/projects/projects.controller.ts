@@ -1,7 +1,11 @@
-import { Controller, Get, Param, ParseUUIDPipe } from '@nestjs/common';
+import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Put } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { Roles } from '../common/decorators/roles.decorator.js';
 import type { AuthUser } from '../common/roles.js';
+import { CreateProjectDto } from './dto/create-project.dto.js';
+import { SetMembersDto } from './dto/members.dto.js';
+import { UpdateProjectDto } from './dto/update-project.dto.js';
 import { ProjectsService } from './projects.service.js';
 
 @ApiTags('projects')
@@ -15,8 +19,32 @@ export class ProjectsController {
     return this.projects.list(user);
   }
 
+  @Post()
+  @Roles('lead', 'admin')
+  create(@CurrentUser() user: AuthUser, @Body() dto: CreateProjectDto) {
+    return this.projects.create(user, dto);
+  }
+
   @Get(':id')
   get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.projects.get(user, id);
+  }
+
+  @Patch(':id')
+  @Roles('lead', 'admin')
+  update(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateProjectDto) {
+    return this.projects.update(user, id, dto);
+  }
+
+  @Get(':id/members')
+  @Roles('lead', 'admin', 'supervisor')
+  members(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.projects.members(user, id);
+  }
+
+  @Put(':id/members')
+  @Roles('lead', 'admin')
+  setMembers(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: SetMembersDto) {
+    return this.projects.setMembers(user, id, dto.userIds);
   }
 }

@@ -1,6 +1,13 @@
 import { Module } from '@nestjs/common';
+import { CellAllocatorModule } from '../quotas/cell-allocator.js';
+import { ProjectAccess } from './project-access.service.js';
 import { ProjectsController } from './projects.controller.js';
 import { ProjectsService } from './projects.service.js';
 
-@Module({ controllers: [ProjectsController], providers: [ProjectsService], exports: [ProjectsService] })
+@Module({
+  imports: [CellAllocatorModule],
+  controllers: [ProjectsController],
+  providers: [ProjectsService, ProjectAccess],
+  exports: [ProjectsService, ProjectAccess],
+})
 export class ProjectsModule {}

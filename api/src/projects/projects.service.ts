@@ -1,8 +1,12 @@
-import { Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
 import type { ProjectRow } from '../database/tables.js';
+import type { CreateProjectDto } from './dto/create-project.dto.js';
+import type { UpdateProjectDto } from './dto/update-project.dto.js';
+import { CellAllocator } from '../quotas/cell-allocator.js';
+import { ProjectAccess } from './project-access.service.js';
 
 export interface ProjectSummary {
   id: string;
@@ -12,9 +16,17 @@ export interface ProjectSummary {
   fieldEnd: string | null;
   targetSize: number;
   status: ProjectRow['status'];
+  headlineQuestion: string;
 }
 
-function summary(row: ProjectRow): ProjectSummary {
+export interface ProjectMember {
+  id: string;
+  name: string;
+  email: string;
+  role: AuthUser['role'];
+}
+
+export function projectSummary(row: ProjectRow): ProjectSummary {
   return {
     id: row.id,
     name: row.name,
@@ -23,36 +35,110 @@ function summary(row: ProjectRow): ProjectSummary {
     fieldEnd: row.field_end,
     targetSize: row.target_size,
     status: row.status,
+    headlineQuestion: row.headline_question,
   };
 }
 
-/** Interviewers and clients see only the projects they are members of. */
-const MEMBERS_ONLY: ReadonlySet<AuthUser['role']> = new Set(['interviewer', 'client']);
+function checkDates(start?: string | null, end?: string | null): void {
+  if (start && end && start > end) {
+    throw new BadRequestException({
+      message: 'fieldEnd must not be before fieldStart',
+      fields: [{ field: 'fieldEnd', message: 'must not be before fieldStart' }],
+    });
+  }
+}
 
 @Injectable()
 export class ProjectsService {
-  constructor(@Inject(KNEX) private readonly db: Knex) {}
-
-  private visible(user: AuthUser) {
-    const query = this.db('projects').where('projects.organisation_id', user.organisationId);
-    if (MEMBERS_ONLY.has(user.role)) {
-      query.whereExists(
-        this.db('project_members')
-          .whereRaw('project_members.project_id = projects.id')
-          .where('project_members.user_id', user.id),
-      );
-    }
-    return query;
-  }
+  constructor(
+    @Inject(KNEX) private readonly db: Knex,
+    private readonly access: ProjectAccess,
+    private readonly cells: CellAllocator,
+  ) {}
 
   async list(user: AuthUser): Promise<ProjectSummary[]> {
-    const rows = await this.visible(user).select('projects.*').orderBy('projects.created_at', 'desc');
-    return rows.map(summary);
+    const rows = await this.access.visibleProjects(user).select('projects.*').orderBy('projects.created_at', 'desc');
+    return rows.map(projectSummary);
   }
 
   async get(user: AuthUser, id: string): Promise<ProjectSummary> {
-    const row = await this.visible(user).where('projects.id', id).first('projects.*');
-    if (!row) throw new NotFoundException('No such project');
-    return summary(row);
+    return projectSummary(await this.access.find(user, id));
+  }
+
+  async create(user: AuthUser, dto: CreateProjectDto): Promise<ProjectSummary> {
+    checkDates(dto.fieldStart, dto.fieldEnd);
+    const [row] = await this.db('projects')
+      .insert({
+        organisation_id: user.organisationId,
+        name: dto.name.trim(),
+        topic: dto.topic?.trim() ?? '',
+        field_start: dto.fieldStart,
+        field_end: dto.fieldEnd,
+        target_size: dto.targetSize,
+        headline_question: dto.headlineQuestion.trim(),
+        status: 'setup',
+      })
+      .returning('*');
+    return projectSummary(row as ProjectRow);
+  }
+
+  /** A new target size recomputes the cell targets. */
+  async update(user: AuthUser, id: string, dto: UpdateProjectDto): Promise<ProjectSummary> {
+    const current = await this.access.find(user, id);
+    checkDates(dto.fieldStart ?? current.field_start, dto.fieldEnd ?? current.field_end);
+    const changes: Partial<ProjectRow> = {};
+    if (dto.name !== undefined) changes.name = dto.name.trim();
+    if (dto.topic !== undefined) changes.topic = dto.topic.trim();
+    if (dto.fieldStart !== undefined) changes.field_start = dto.fieldStart;
+    if (dto.fieldEnd !== undefined) changes.field_end = dto.fieldEnd;
+    if (dto.targetSize !== undefined) changes.target_size = dto.targetSize;
+    if (dto.headlineQuestion !== undefined) changes.headline_question = dto.headlineQuestion.trim();
+    if (dto.status !== undefined) changes.status = dto.status;
+    if (Object.keys(changes).length === 0) return projectSummary(current);
+    const row = await this.db.transaction(async (trx) => {
+      const [updated] = await trx('projects').where({ id }).update(changes).returning('*');
+      if (changes.target_size !== undefined && changes.target_size !== current.target_size) {
+        await this.cells.recompute(id, trx);
+      }
+      return updated as ProjectRow;
+    });
+    return projectSummary(row);
+  }
+
+  async members(user: AuthUser, id: string): Promise<ProjectMember[]> {
+    await this.access.find(user, id);
+    return this.db('project_members')
+      .join('users', 'users.id', 'project_members.user_id')
+      .where('project_members.project_id', id)
+      .orderBy(['users.role', 'users.name'])
+      .select('users.id', 'users.name', 'users.email', 'users.role');
+  }
+
+  /** Replaces the project's members; every id must be an active user of the organisation. */
+  async setMembers(user: AuthUser, id: string, userIds: string[]): Promise<ProjectMember[]> {
+    await this.access.find(user, id);
+    const unique = [...new Set(userIds)];
+    const found = await this.db('users')
+      .where({ organisation_id: user.organisationId, active: true })
+      .whereIn('id', unique)
+      .select('id');
+    const known = new Set(found.map((r) => r.id));
+    const missing = unique.filter((u) => !known.has(u));
+    if (missing.length) {
+      throw new BadRequestException({
+        message: `Unknown user id ${missing[0]}`,
+        fields: [{ field: 'userIds', message: `unknown user id ${missing[0]}` }],
+      });
+    }
+    await this.db.transaction(async (trx) => {
+      await trx('project_members').where({ project_id: id }).whereNotIn('user_id', unique).delete();
+      if (unique.length) {
+        await trx('project_members')
+          .insert(unique.map((userId) => ({ project_id: id, user_id: userId })))
+          .onConflict(['project_id', 'user_id'])
+          .ignore();
+      }
+    });
+    return this.members(user, id);
   }
 }

@@ -17,13 +17,16 @@ import { TodayPage } from '../features/fieldwork/pages/today-page';
 import { CellsPage } from '../features/fieldwork/pages/cells-page';
 import { OutboxPage } from '../features/outbox/pages/outbox-page';
 import { QuotaBoardPage } from '../features/quotas/pages/quota-board-page';
+import { ProjectQuotaBoardPage } from '../features/quotas/pages/project-quota-board-page';
 import { ReviewQueuePage } from '../features/review/pages/review-queue-page';
 import { InterviewersPage } from '../features/team/pages/interviewers-page';
 import { ProjectsPage } from '../features/projects/pages/projects-page';
+import { NewProjectPage } from '../features/projects/pages/new-project-page';
+import { ProjectPage } from '../features/projects/pages/project-page';
 import { BalancePage } from '../features/balance/pages/balance-page';
 import { BenchmarksPage } from '../features/benchmarks/pages/benchmarks-page';
 import { DeliveryPage } from '../features/delivery/pages/delivery-page';
-import { ProgressPage } from '../features/progress/pages/progress-page';
+import { ProgressPage } from '../features/balance/pages/progress-page';
 import { PeoplePage } from '../features/people/pages/people-page';
 
 export interface NavItem {
@@ -31,6 +34,8 @@ export interface NavItem {
   label: string;
   icon: string;
   element: ReactElement;
+  /** Pages reached from this section (e.g. one project), not listed in the navigation. */
+  subPages?: { path: string; element: ReactElement }[];
 }
 
 /** Each role's own area: its home is the first item. A path outside it sends the person home. */
@@ -46,7 +51,17 @@ export const roleNavigation: Record<Role, NavItem[]> = {
     { path: '/supervisor/interviewers', label: 'Interviewers', icon: peopleOutline, element: <InterviewersPage /> },
   ],
   lead: [
-    { path: '/lead', label: 'Projects', icon: folderOpenOutline, element: <ProjectsPage /> },
+    {
+      path: '/lead',
+      label: 'Projects',
+      icon: folderOpenOutline,
+      element: <ProjectsPage />,
+      subPages: [
+        { path: '/lead/projects/new', element: <NewProjectPage /> },
+        { path: '/lead/projects/:projectId', element: <ProjectPage /> },
+        { path: '/lead/projects/:projectId/quota-board', element: <ProjectQuotaBoardPage /> },
+      ],
+    },
     { path: '/lead/balance', label: 'Balance', icon: scaleOutline, element: <BalancePage /> },
     { path: '/lead/benchmarks', label: 'Benchmarks', icon: gitCompareOutline, element: <BenchmarksPage /> },
     { path: '/lead/delivery', label: 'Delivery', icon: documentTextOutline, element: <DeliveryPage /> },

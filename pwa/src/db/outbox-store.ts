@@ -1,7 +1,8 @@
-// Unsent interviews on this device (table `outbox`). They stay here, signed in or not,
-// until the server acknowledges them; the sync module of a later issue sends them.
+// Contacts logged on this device (table `outbox`). They stay here, signed in or not, until
+// the server acknowledges them; only the sync module removes them after the server's reply,
+// or the interviewer discards one the server refused.
 import { useLiveQuery } from 'dexie-react-hooks';
-import { db } from './plumbline-db';
+import { db, type InterviewRecord, type OutboxEntry } from './plumbline-db';
 
 export async function countUnsent(): Promise<number> {
   return db.outbox.count();
@@ -10,4 +11,52 @@ export async function countUnsent(): Promise<number> {
 /** `undefined` while the device storage is being read. */
 export function useUnsentCount(): number | undefined {
   return useLiveQuery(() => db.outbox.count(), []);
+}
+
+export function isRejected(entry: OutboxEntry): boolean {
+  return typeof entry.rejectedReason === 'string';
+}
+
+/** Writes one contact to the device. Nothing else happens before this has finished. */
+export async function addToOutbox(interviewerId: string, projectId: string, record: InterviewRecord): Promise<void> {
+  await db.outbox.add({
+    clientId: record.id,
+    interviewerId,
+    projectId,
+    createdAt: new Date().toISOString(),
+    payload: record,
+  });
+}
+
+/** This interviewer's entries, oldest first (sent and refused alike). */
+export async function listOwnEntries(interviewerId: string): Promise<OutboxEntry[]> {
+  return db.outbox.where('interviewerId').equals(interviewerId).sortBy('createdAt');
+}
+
+/** This interviewer's entries waiting to be sent, oldest first. */
+export async function listWaiting(interviewerId: string): Promise<OutboxEntry[]> {
+  return (await listOwnEntries(interviewerId)).filter((entry) => !isRejected(entry));
+}
+
+/** `undefined` while reading (or while nobody is known to be signed in). */
+export function useOwnEntries(interviewerId: string | undefined): OutboxEntry[] | undefined {
+  return useLiveQuery(async () => (interviewerId ? listOwnEntries(interviewerId) : undefined), [interviewerId]);
+}
+
+/** How many entries on this device belong to someone other than `interviewerId`. */
+export function useOthersCount(interviewerId: string | undefined): number | undefined {
+  return useLiveQuery(
+    async () => (interviewerId ? db.outbox.where('interviewerId').notEqual(interviewerId).count() : undefined),
+    [interviewerId],
+  );
+}
+
+/** Removes one refused entry on the interviewer's deliberate choice; waiting entries are never discarded here. */
+export async function discardRejected(clientId: string, interviewerId: string): Promise<boolean> {
+  return db.transaction('rw', db.outbox, async () => {
+    const entry = await db.outbox.get(clientId);
+    if (!entry || entry.interviewerId !== interviewerId || !isRejected(entry)) return false;
+    await db.outbox.delete(clientId);
+    return true;
+  });
 }

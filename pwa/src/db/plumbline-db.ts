@@ -1,12 +1,14 @@
 // The device's own storage: IndexedDB database "plumbline" (Dexie).
-//   session  one row ("current"): the signed-in user and their tokens, so a reload or an
-//            offline restart keeps the person signed in. Sign-out deletes this row only.
-//   outbox   interviews logged on this device and not yet acknowledged by the server, keyed
-//            by the client-generated UUID. Survives sign-out, reload and restart; later
-//            issues fill and send it.
-//   meta     small device facts (e.g. when cell status was last synced).
+//   session       one row ("current"): the signed-in user and their tokens, so a reload or an
+//                 offline restart keeps the person signed in. Sign-out deletes this row only.
+//   outbox        contacts logged on this device and not yet acknowledged by the server, keyed
+//                 by the client-generated UUID. Survives sign-out, reload and restart. An entry
+//                 the server refused keeps its reason here until the interviewer discards it.
+//   meta          small device facts (e.g. when this interviewer last synced).
+//   projectCache  (v2) each interviewer's assigned projects as last seen online.
+//   cellCache     (v2) each project's quota variables and cell counts from the last sync.
 // Everything here works offline; nothing here is ever sent except by the sync module.
-import { Dexie, type EntityTable } from 'dexie';
+import { Dexie, type EntityTable, type Table } from 'dexie';
 import type { Role } from '../config/roles';
 
 export interface SessionUser {
@@ -26,6 +28,19 @@ export interface StoredSession {
   user: SessionUser;
 }
 
+export type Disposition = 'complete' | 'partial' | 'refusal' | 'non_contact' | 'other' | 'not_eligible';
+
+/** One contact exactly as the sync API takes it: categories, answer and paradata only. */
+export interface InterviewRecord {
+  id: string;
+  disposition: Disposition;
+  /** Quota variable id → category id (every variable for a complete). */
+  categories?: Record<string, string>;
+  headlineAnswer?: boolean;
+  startedAt: string;
+  endedAt: string;
+}
+
 export interface OutboxEntry {
   /** Client-generated UUID: the idempotency key for upload. */
   clientId: string;
@@ -33,7 +48,11 @@ export interface OutboxEntry {
   interviewerId: string;
   projectId: string;
   createdAt: string;
+  /** An InterviewRecord; typed loosely because rows written by an older app may differ. */
   payload: unknown;
+  /** Set when the server refused the entry: it stays here, is not sent again, and shows its reason. */
+  rejectedReason?: string;
+  rejectedAt?: string;
 }
 
 export interface MetaEntry {
@@ -41,10 +60,65 @@ export interface MetaEntry {
   value: unknown;
 }
 
+/** A project as GET /api/projects lists it. */
+export interface FieldProject {
+  id: string;
+  name: string;
+  topic: string;
+  fieldStart: string | null;
+  fieldEnd: string | null;
+  targetSize: number;
+  status: string;
+  headlineQuestion: string;
+}
+
+export interface CachedProject {
+  userId: string;
+  projectId: string;
+  /** Order in the server's list. */
+  position: number;
+  project: FieldProject;
+  savedAt: string;
+}
+
+export type CellStatus = 'open' | 'nearly_full' | 'full' | 'closed';
+
+export interface QuotaVariable {
+  id: string;
+  name: string;
+  interlocked: boolean;
+  categories: { id: string; label: string }[];
+}
+
+/** A cell as the server counts it (GET cells, and every sync reply). */
+export interface QuotaCell {
+  id: string;
+  kind: 'interlocked' | 'margin';
+  label: string;
+  categoryIds: string[];
+  target: number;
+  achieved: number;
+  overQuota: number;
+  remaining: number;
+  fillRate: number;
+  status: CellStatus;
+  closedAt: string | null;
+}
+
+export interface CachedCells {
+  projectId: string;
+  variables: QuotaVariable[];
+  cells: QuotaCell[];
+  /** When the server gave these counts. */
+  syncedAt: string;
+}
+
 export class PlumblineDb extends Dexie {
   session!: EntityTable<StoredSession, 'id'>;
   outbox!: EntityTable<OutboxEntry, 'clientId'>;
   meta!: EntityTable<MetaEntry, 'key'>;
+  projectCache!: Table<CachedProject, [string, string]>;
+  cellCache!: EntityTable<CachedCells, 'projectId'>;
 
   constructor() {
     super('plumbline');
@@ -52,6 +126,14 @@ export class PlumblineDb extends Dexie {
       session: 'id',
       outbox: 'clientId, interviewerId, createdAt',
       meta: 'key',
+    });
+    // v2 adds the offline caches; existing sessions and outbox entries are kept as they are.
+    this.version(2).stores({
+      session: 'id',
+      outbox: 'clientId, interviewerId, projectId, createdAt',
+      meta: 'key',
+      projectCache: '[userId+projectId], userId',
+      cellCache: 'projectId',
     });
   }
 }

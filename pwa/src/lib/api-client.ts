@@ -73,13 +73,15 @@ async function send(path: string, options: RequestOptions, accessToken?: string)
     throw new ApiError(offlineMessage, 'offline');
   }
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  // A FormData body (a file upload) goes as multipart; the browser sets its boundary.
+  const multipart = typeof FormData !== 'undefined' && options.body instanceof FormData;
+  if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
   if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
   try {
     return await fetch(`${basePath}${path}`, {
       method: options.method ?? 'GET',
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : multipart ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
       credentials: 'same-origin',
     });

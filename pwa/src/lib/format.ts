@@ -24,3 +24,41 @@ export function formatDate(value: string | null | undefined): string {
 export function formatCount(value: number): string {
   return countFormat.format(value);
 }
+
+const clockFormat = new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit' });
+
+/** A moment (ISO timestamp) → "14:05" in the viewer's time zone. */
+export function formatClock(value: string | null | undefined): string {
+  if (!value) return '—';
+  const date = new Date(value);
+  return Number.isNaN(date.getTime()) ? value : clockFormat.format(date);
+}
+
+/** A proportion (0.4828) → "48.3%". Shares are proportions in the code, percentages on screen. */
+export function formatPercent(share: number | null | undefined, digits = 1): string {
+  if (share === null || share === undefined || !Number.isFinite(share)) return '—';
+  return `${(share * 100).toFixed(digits)}%`;
+}
+
+/** A difference of two proportions → signed percentage points, e.g. "+7.9 pts" or "−3.1 pts". */
+export function formatPoints(difference: number, digits = 1): string {
+  const points = Number((difference * 100).toFixed(digits));
+  if (points === 0) return `0.${'0'.repeat(digits)} pts`;
+  return `${points > 0 ? '+' : '−'}${Math.abs(points).toFixed(digits)} pts`;
+}
+
+/** A plain number with fixed decimals, e.g. a design effect 1.2052 → "1.21". */
+export function formatDecimal(value: number | null | undefined, digits = 2): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
+  return value.toFixed(digits);
+}
+
+const momentFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
+
+/** A moment (ISO timestamp) → "14:05" today, "3 Dec, 14:05" on another day, in the viewer's time zone. */
+export function formatMoment(value: string | null | undefined, now = new Date()): string {
+  if (!value) return '—';
+  const date = new Date(value);
+  if (Number.isNaN(date.getTime())) return value;
+  return date.toDateString() === now.toDateString() ? `today ${clockFormat.format(date)}` : momentFormat.format(date);
+}

@@ -21,8 +21,19 @@ if (!window.matchMedia) {
   });
 }
 
+// jsdom has no ResizeObserver; the balance charts' responsive container asks for one.
+if (!('ResizeObserver' in window)) {
+  class NoResizeObserver {
+    observe() {}
+    unobserve() {}
+    disconnect() {}
+  }
+  Object.defineProperty(window, 'ResizeObserver', { writable: true, value: NoResizeObserver });
+}
+
 beforeEach(async () => {
   await Promise.all(db.tables.map((table) => table.clear()));
+  window.localStorage.clear();
   window.history.replaceState(null, '', '/');
 });
 

@@ -35,6 +35,9 @@ export function RoleShell({ user }: { user: SessionUser }) {
               {items.map((item) => (
                 <Route key={item.path} path={item.path} element={item.element} />
               ))}
+              {items.flatMap((item) =>
+                (item.subPages ?? []).map((sub) => <Route key={sub.path} path={sub.path} element={sub.element} />),
+              )}
               <Route path="*" element={<Navigate to={homePathFor(user.role)} replace />} />
             </IonRouterOutlet>
           </div>

@@ -1,9 +1,14 @@
-import { PlannedPage } from '../../../components/planned-page';
+import { PageFrame } from '../../../components/page-frame';
+import { ProjectBalance } from '../components/project-balance';
 
+/** The lead's balance: how far the sample has drifted from the targets, and what it costs. */
 export function BalancePage() {
   return (
-    <PlannedPage title="Balance">
-      <p>For the interviews so far: the sample mix against the targets, design effect, effective sample size, margin of error, and the implied bias factor with its trend and its projection to the end of fieldwork.</p>
-    </PlannedPage>
+    <PageFrame
+      title="Balance"
+      lead="How far the completed interviews have drifted from the population targets, what weighting back costs in precision, and how much the drift pulls the headline share."
+    >
+      <ProjectBalance emptyNote="Set up a project first; its balance appears here once interviews come in." />
+    </PageFrame>
   );
 }

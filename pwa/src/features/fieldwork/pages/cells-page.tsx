@@ -1,9 +1,46 @@
-import { PlannedPage } from '../../../components/planned-page';
+// Cell status of the interviewer's projects from the last sync plus this device's unsent
+// completes. Read from the device, so it is there offline.
+import '../fieldwork.css';
+import { PageFrame } from '../../../components/page-frame';
+import { EmptyPanel, LoadingPanel } from '../../../components/state-panels';
+import { formatMoment } from '../../../lib/format';
+import { useBackgroundSync } from '../../../sync/use-background-sync';
+import { CellTable } from '../components/cell-table';
+import { useFieldStatus } from '../hooks/use-field-status';
 
 export function CellsPage() {
+  useBackgroundSync();
+  const field = useFieldStatus();
+
   return (
-    <PlannedPage title="Cells">
-      <p>Every cell of your projects with its status (open, nearly full, full or closed), so you know before you start whether a respondent's cell is still open.</p>
-    </PlannedPage>
+    <PageFrame title="Cells" lead="Before you start, check that the respondent’s cells are still open.">
+      {!field ? (
+        <LoadingPanel what="cells" />
+      ) : field.projects.length === 0 ? (
+        <EmptyPanel title="No cells on this device yet">
+          <p>The cells of your projects appear here after this device’s first sync with the network.</p>
+        </EmptyPanel>
+      ) : (
+        field.projects.map((project) => {
+          const status = field.cells[project.id];
+          return (
+            <section key={project.id} className="pl-card pl-cells-card" aria-label={`Cells of ${project.name}`}>
+              <h2 className="pl-card-title">{project.name}</h2>
+              {status ? (
+                <>
+                  <p className="pl-muted pl-small">
+                    As of the sync {formatMoment(status.syncedAt)}, with your unsent interviews counted.
+                  </p>
+                  <CellTable title="Crossed cells" cells={status.cells.filter((c) => c.kind === 'interlocked')} />
+                  <CellTable title="Single-variable cells" cells={status.cells.filter((c) => c.kind === 'margin')} />
+                </>
+              ) : (
+                <p className="pl-muted">Not synced on this device yet.</p>
+              )}
+            </section>
+          );
+        })
+      )}
+    </PageFrame>
   );
 }

@@ -1,9 +1,88 @@
-import { PlannedPage } from '../../../components/planned-page';
+// The interviewer's home: assigned projects from the device's cache, each with the way to
+// log a contact. Works offline once the device has synced one time.
+import { useState } from 'react';
+import '../fieldwork.css';
+import { PageFrame } from '../../../components/page-frame';
+import { EmptyPanel, LoadingPanel, OfflinePanel } from '../../../components/state-panels';
+import { isRejected } from '../../../db/outbox-store';
+import { useOnline } from '../../../hooks/use-online';
+import { useSyncProgress } from '../../../sync/sync-progress';
+import { useBackgroundSync } from '../../../sync/use-background-sync';
+import { LogContact } from '../components/log-contact';
+import { ProjectCard } from '../components/project-card';
+import { SyncLine } from '../components/sync-line';
+import { useFieldStatus } from '../hooks/use-field-status';
 
 export function TodayPage() {
+  useBackgroundSync();
+  const field = useFieldStatus();
+  const online = useOnline();
+  const progress = useSyncProgress();
+  const [logging, setLogging] = useState<string | null>(null);
+  const [saved, setSaved] = useState<string>();
+
+  const project = field?.projects.find((p) => p.id === logging);
+  if (field && project) {
+    return (
+      <PageFrame title="Log a contact">
+        <LogContact
+          key={project.id}
+          userId={field.userId}
+          project={project}
+          status={field.cells[project.id]}
+          onCancel={() => setLogging(null)}
+          onSaved={(message) => {
+            setSaved(message);
+            setLogging(null);
+          }}
+        />
+      </PageFrame>
+    );
+  }
+
+  const waiting = field?.entries.filter((e) => !isRejected(e)).length ?? 0;
   return (
-    <PlannedPage title="Today">
-      <p>Your projects for today and the cells still open for you, from the last sync, with the way to log each contact and its outcome, online or not.</p>
-    </PlannedPage>
+    <PageFrame title="Today">
+      {!field ? (
+        <LoadingPanel what="your projects" />
+      ) : (
+        <>
+          {saved ? (
+            <p className="pl-saved" role="status">
+              {saved} {online ? 'Sending it now.' : 'It goes to the office when the network is back.'}
+            </p>
+          ) : null}
+          <SyncLine waiting={waiting} lastSync={field.lastSync} />
+          {field.projects.length > 0 ? (
+            <ul className="pl-card-list" aria-label="Your projects">
+              {field.projects.map((p) => (
+                <ProjectCard
+                  key={p.id}
+                  project={p}
+                  status={field.cells[p.id]}
+                  onLog={() => {
+                    setSaved(undefined);
+                    setLogging(p.id);
+                  }}
+                />
+              ))}
+            </ul>
+          ) : progress.running || (online && field.lastSync === null && progress.problems.length === 0) ? (
+            <LoadingPanel what="your projects" />
+          ) : !online ? (
+            <OfflinePanel>Your projects appear here after this device’s first sync with the network.</OfflinePanel>
+          ) : (
+            <EmptyPanel title="No projects for you yet">
+              <p>Projects your supervisor assigns to you appear here.</p>
+              {progress.problems.map((p) => (
+                <p key={p} className="pl-muted">
+                  {p}
+                </p>
+              ))}
+            </EmptyPanel>
+          )}
+        </>
+      )}
+    </PageFrame>
   );
 }

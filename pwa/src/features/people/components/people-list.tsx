@@ -1,6 +1,6 @@
 import { roleLabels } from '../../../config/roles';
 import { formatDate } from '../../../lib/format';
-import type { OrganisationUser } from '../api/get-users';
+import type { OrganisationUser } from '../../../lib/users/get-users';
 
 export function PeopleList({ people }: { people: OrganisationUser[] }) {
   const sorted = [...people].sort((a, b) => a.name.localeCompare(b.name));

@@ -1,7 +1,7 @@
 import { PageFrame } from '../../../components/page-frame';
 import { QueryView } from '../../../components/query-view';
 import { EmptyPanel } from '../../../components/state-panels';
-import { useUsers } from '../api/get-users';
+import { useUsers } from '../../../lib/users/get-users';
 import { PeopleList } from '../components/people-list';
 
 export function PeoplePage() {

@@ -1,5 +1,6 @@
+import { Link } from 'react-router-dom';
 import { formatCalendarDate, formatCount } from '../../../lib/format';
-import type { Project } from '../api/get-projects';
+import type { Project } from '../../../lib/projects/get-projects';
 
 const statusWords: Record<string, string> = {
   draft: 'Being set up',
@@ -16,7 +17,11 @@ export function ProjectList({ projects }: { projects: Project[] }) {
       {projects.map((project) => (
         <li key={project.id} className="pl-card">
           <div className="pl-card-head">
-            <h2 className="pl-card-title">{project.name}</h2>
+            <h2 className="pl-card-title">
+              <Link to={`/lead/projects/${project.id}`} className="pl-card-link">
+                {project.name}
+              </Link>
+            </h2>
             <span className="pl-tag">{statusWords[project.status] ?? project.status}</span>
           </div>
           <p className="pl-card-text">{project.topic}</p>

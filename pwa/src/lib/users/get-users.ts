@@ -1,7 +1,7 @@
-// GET /api/users (admin only): the organisation's accounts. Server data: query cache only.
+// GET /api/users (admin and lead): the organisation's accounts. Server data: query cache only.
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import type { Role } from '../../../config/roles';
+import { apiRequest } from '../api-client';
+import type { Role } from '../../config/roles';
 
 export interface OrganisationUser {
   id: string;

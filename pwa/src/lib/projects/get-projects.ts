@@ -1,6 +1,7 @@
 // GET /api/projects: the projects this user may see. Server data: lives in the query cache.
+// Shared (lib) because the project picker of several features reads the same list.
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
+import { apiRequest } from '../api-client';
 
 export interface Project {
   id: string;
@@ -9,12 +10,14 @@ export interface Project {
   fieldStart: string | null;
   fieldEnd: string | null;
   targetSize: number;
-  status: string;
+  status: 'setup' | 'fieldwork' | 'closed' | string;
+  headlineQuestion?: string;
 }
 
 export const projectKeys = {
   all: ['projects'] as const,
   list: () => [...projectKeys.all, 'list'] as const,
+  detail: (id: string) => [...projectKeys.all, 'detail', id] as const,
 };
 
 export function getProjects(signal?: AbortSignal): Promise<Project[]> {

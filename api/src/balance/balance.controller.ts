@@ -1,0 +1,24 @@
+import { Controller, Get, Param, ParseUUIDPipe } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { Roles } from '../common/decorators/roles.decorator.js';
+import type { AuthUser } from '../common/roles.js';
+import { ProjectAccess } from '../projects/project-access.service.js';
+import { BalanceService } from './balance.service.js';
+
+@ApiTags('balance')
+@ApiBearerAuth()
+@Controller('projects/:projectId/balance')
+export class BalanceController {
+  constructor(
+    private readonly access: ProjectAccess,
+    private readonly balanceService: BalanceService,
+  ) {}
+
+  /** Read-only for clients of the project; interviewers do not see it. */
+  @Get()
+  @Roles('lead', 'admin', 'supervisor', 'client')
+  async balance(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string) {
+    return this.balanceService.balance(await this.access.find(user, projectId));
+  }
+}

@@ -1,0 +1,105 @@
+// Population targets as text: `variable,category,share`, one category a line. Shared by
+// the API (uploaded files) and the `plumbline` command line (files on disk).
+import { parse } from 'csv-parse/sync';
+
+export interface TargetShare {
+  category: string;
+  share: number;
+}
+
+export interface TargetVariable {
+  variable: string;
+  shares: TargetShare[];
+}
+
+export interface ParsedTargets {
+  targets: TargetVariable[];
+  /** Line of a variable's category row, for messages. */
+  lineOf(variable: string, category: string): number;
+}
+
+/** A problem in a targets file; the message names the source, line and what is wrong. */
+export class TargetsFormatError extends Error {}
+
+const COLUMNS = ['variable', 'category', 'share'] as const;
+
+/** Reads a share: "0.25", "25", and with semicolon files also the decimal comma "0,25". */
+function parseShare(text: string, decimalComma: boolean): number | null {
+  let t = text.trim();
+  if (decimalComma && /^\d+,\d+$/.test(t)) t = t.replace(',', '.');
+  if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) return null;
+  const value = Number(t);
+  return Number.isFinite(value) ? value : null;
+}
+
+/** Picks the delimiter from the header line: a semicolon file has no comma in its header. */
+function detectDelimiter(text: string): ',' | ';' {
+  const header = text.split(/\r?\n/, 1)[0] ?? '';
+  return header.includes(';') && !header.includes(',') ? ';' : ',';
+}
+
+/**
+ * Parses a targets file (UTF-8, with or without BOM, comma or semicolon separated).
+ * Shares may be any non-negative numbers (counts too); they are normalised per variable
+ * by whoever uses them. Every problem throws with the source and line.
+ */
+export function parseTargetsCsv(text: string, source: string): ParsedTargets {
+  const body = text.replace(/^\uFEFF/, '');
+  if (body.trim() === '') throw new TargetsFormatError(`${source}: file is empty`);
+  const delimiter = detectDelimiter(body);
+  let rows: { record: string[]; info: { lines: number } }[];
+  try {
+    rows = parse(body, { delimiter, skip_empty_lines: true, info: true, relax_column_count: false }) as unknown as typeof rows;
+  } catch (error) {
+    throw new TargetsFormatError(`${source}: ${(error as Error).message.replace(/\s+/g, ' ')}`);
+  }
+  const [head, ...records] = rows;
+  if (!head) throw new TargetsFormatError(`${source}: file is empty`);
+  const header = head.record.map((h) => h.trim().toLowerCase());
+  for (const column of COLUMNS) {
+    if (!header.includes(column)) {
+      throw new TargetsFormatError(`${source}: line ${head.info.lines}: missing column "${column}" (expected variable${delimiter}category${delimiter}share)`);
+    }
+  }
+  const extra = header.find((h) => !(COLUMNS as readonly string[]).includes(h));
+  if (extra !== undefined) throw new TargetsFormatError(`${source}: line ${head.info.lines}: unexpected column "${extra}"`);
+  if (records.length === 0) throw new TargetsFormatError(`${source}: no rows after the header line`);
+  const [iv, ic, is] = COLUMNS.map((c) => header.indexOf(c)) as [number, number, number];
+
+  const byVariable = new Map<string, TargetShare[]>();
+  const lines = new Map<string, number>();
+  for (const { record, info } of records) {
+    const line = info.lines;
+    const variable = (record[iv] ?? '').trim();
+    const category = (record[ic] ?? '').trim();
+    const text = record[is] ?? '';
+    if (variable === '') throw new TargetsFormatError(`${source}: line ${line}: variable is empty`);
+    if (category === '') throw new TargetsFormatError(`${source}: line ${line}: variable ${variable}: category is empty`);
+    const share = parseShare(text, delimiter === ';');
+    if (share === null || share < 0) {
+      throw new TargetsFormatError(
+        `${source}: line ${line}: variable ${variable} category "${category}": share "${text.trim()}" is not a non-negative number`,
+      );
+    }
+    const key = JSON.stringify([variable, category]);
+    if (lines.has(key)) {
+      throw new TargetsFormatError(
+        `${source}: line ${line}: variable ${variable} category "${category}" is given twice (first on line ${lines.get(key)})`,
+      );
+    }
+    lines.set(key, line);
+    const list = byVariable.get(variable) ?? [];
+    list.push({ category, share });
+    byVariable.set(variable, list);
+  }
+  for (const [variable, shares] of byVariable) {
+    if (shares.every((s) => s.share === 0)) {
+      const line = lines.get(JSON.stringify([variable, shares[0]?.category]));
+      throw new TargetsFormatError(`${source}: line ${line}: variable ${variable}: all shares are zero`);
+    }
+  }
+  return {
+    targets: [...byVariable].map(([variable, shares]) => ({ variable, shares })),
+    lineOf: (variable, category) => lines.get(JSON.stringify([variable, category])) ?? 0,
+  };
+}

@@ -1,0 +1,41 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsISO8601, IsObject, IsOptional, IsUUID } from 'class-validator';
+import { DISPOSITIONS, type Disposition } from '../../database/tables.js';
+
+export const SYNC_BATCH_LIMIT = 1000;
+
+/** The whole batch is checked only for its shape; each interview is checked on its own. */
+export class SyncBatchDto {
+  @ApiProperty({ type: 'array', items: { type: 'object' }, description: `Up to ${SYNC_BATCH_LIMIT} interviews` })
+  @IsArray({ message: 'interviews must be a list' })
+  @ArrayMaxSize(SYNC_BATCH_LIMIT, { message: `interviews may hold at most ${SYNC_BATCH_LIMIT} items per batch` })
+  interviews: unknown[];
+}
+
+export class InterviewItemDto {
+  @ApiProperty({ description: 'UUID made on the device when the contact was logged' })
+  @IsUUID('all', { message: 'id must be a UUID' })
+  id: string;
+
+  @ApiProperty({ enum: DISPOSITIONS })
+  @IsIn(DISPOSITIONS, { message: `disposition must be one of ${DISPOSITIONS.join(', ')}` })
+  disposition: Disposition;
+
+  @ApiPropertyOptional({ description: 'Quota variable id → category id; required for a complete' })
+  @IsOptional()
+  @IsObject({ message: 'categories must map variable ids to category ids' })
+  categories?: Record<string, unknown>;
+
+  @ApiPropertyOptional({ description: 'Answer to the headline question; required for a complete' })
+  @IsOptional()
+  @IsBoolean({ message: 'headlineAnswer must be true or false' })
+  headlineAnswer?: boolean;
+
+  @ApiProperty({ example: '2026-11-20T10:02:00Z' })
+  @IsISO8601({ strict: true }, { message: 'startedAt must be a date-time' })
+  startedAt: string;
+
+  @ApiProperty({ example: '2026-11-20T10:19:00Z' })
+  @IsISO8601({ strict: true }, { message: 'endedAt must be a date-time' })
+  endedAt: string;
+}

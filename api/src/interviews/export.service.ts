@@ -1,0 +1,40 @@
+// Streams a project's counted completes as CSV, one row per interview, with one column
+// per current quota variable and the headline answer as 0/1. Respondents appear only
+// through their categories and answer.
+import { Inject, Injectable } from '@nestjs/common';
+import { stringify } from 'csv-stringify';
+import type { Knex } from 'knex';
+import type { Writable } from 'node:stream';
+import { pipeline } from 'node:stream/promises';
+import { KNEX } from '../database/database.constants.js';
+import { loadActiveTargets } from '../quotas/cell-allocator.js';
+import { counted } from '../quotas/cells.service.js';
+
+@Injectable()
+export class ExportService {
+  constructor(@Inject(KNEX) private readonly db: Knex) {}
+
+  async writeCsv(projectId: string, out: Writable): Promise<void> {
+    const { variables } = await loadActiveTargets(this.db, projectId);
+    const labelOf = new Map<string, string>();
+    for (const v of variables) for (const c of v.categories) labelOf.set(c.id, c.label);
+    const rows = this.db('interviews')
+      .where({ project_id: projectId })
+      .whereRaw(counted())
+      .orderBy(['field_day', 'ended_at', 'id'])
+      .select('id', 'field_day', 'category_ids', 'headline_answer', 'over_quota', 'review_status')
+      .stream();
+    const csv = stringify({
+      header: true,
+      columns: ['interview_id', 'field_day', ...variables.map((v) => v.name), 'headline', 'over_quota', 'review_status'],
+      cast: { boolean: (value) => (value ? '1' : '0') },
+    });
+    const toRecord = async function* (source: AsyncIterable<{ id: string; field_day: string; category_ids: string[]; headline_answer: boolean; over_quota: boolean; review_status: string }>) {
+      for await (const r of source) {
+        const byVariable = variables.map((v) => v.categories.find((c) => r.category_ids.includes(c.id))?.label ?? '');
+        yield [r.id, r.field_day, ...byVariable, r.headline_answer, r.over_quota, r.review_status];
+      }
+    };
+    await pipeline(rows, toRecord, csv, out);
+  }
+}

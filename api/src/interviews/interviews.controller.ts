@@ -1,0 +1,39 @@
+import { Body, Controller, Get, Header, HttpCode, Param, ParseUUIDPipe, Post, Res } from '@nestjs/common';
+import type { Response } from 'express';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
+import { Roles } from '../common/decorators/roles.decorator.js';
+import type { AuthUser } from '../common/roles.js';
+import { SyncBatchDto } from './dto/sync.dto.js';
+import { ProjectAccess } from '../projects/project-access.service.js';
+import { ExportService } from './export.service.js';
+import { SyncService } from './sync.service.js';
+
+@ApiTags('interviews')
+@ApiBearerAuth()
+@Controller('projects/:projectId/interviews')
+export class InterviewsController {
+  constructor(
+    private readonly syncService: SyncService,
+    private readonly exportService: ExportService,
+    private readonly access: ProjectAccess,
+  ) {}
+
+  /** Idempotent upload: each interview is answered accepted, duplicate or rejected with a reason. */
+  @Post('sync')
+  @HttpCode(200)
+  @Roles('interviewer')
+  sync(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Body() dto: SyncBatchDto) {
+    return this.syncService.sync(user, projectId, dto.interviews);
+  }
+
+  /** Counted completes as CSV, one row per interview (for weighting elsewhere or checking). */
+  @Get('export.csv')
+  @Roles('lead', 'admin')
+  @Header('Content-Type', 'text/csv; charset=utf-8')
+  async export(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Res() res: Response) {
+    const project = await this.access.find(user, projectId);
+    res.setHeader('Content-Disposition', `attachment; filename="${project.name.replace(/[^\w.-]+/g, '-')}-interviews.csv"`);
+    await this.exportService.writeCsv(projectId, res);
+  }
+}

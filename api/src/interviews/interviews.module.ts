@@ -1,0 +1,9 @@
+import { Module } from '@nestjs/common';
+import { ProjectsModule } from '../projects/projects.module.js';
+import { QuotasModule } from '../quotas/quotas.module.js';
+import { InterviewsController } from './interviews.controller.js';
+import { ExportService } from './export.service.js';
+import { SyncService } from './sync.service.js';
+
+@Module({ imports: [ProjectsModule, QuotasModule], controllers: [InterviewsController], providers: [SyncService, ExportService] })
+export class InterviewsModule {}

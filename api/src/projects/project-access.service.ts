@@ -1,0 +1,45 @@
+import { ForbiddenException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import type { Knex } from 'knex';
+import type { AuthUser } from '../common/roles.js';
+import { KNEX } from '../database/database.constants.js';
+import type { ProjectRow } from '../database/tables.js';
+
+/** Interviewers and clients see only the projects they are members of. */
+const MEMBERS_ONLY: ReadonlySet<AuthUser['role']> = new Set(['interviewer', 'client']);
+
+/**
+ * The one place that decides which projects a user may see: everything in their own
+ * organisation for office roles, assigned projects for interviewers and clients.
+ * Anything else is answered 404, as if it did not exist.
+ */
+@Injectable()
+export class ProjectAccess {
+  constructor(@Inject(KNEX) private readonly db: Knex) {}
+
+  visibleProjects(user: AuthUser) {
+    const query = this.db('projects').where('projects.organisation_id', user.organisationId);
+    if (MEMBERS_ONLY.has(user.role)) {
+      query.whereExists(
+        this.db('project_members')
+          .whereRaw('project_members.project_id = projects.id')
+          .where('project_members.user_id', user.id),
+      );
+    }
+    return query;
+  }
+
+  async find(user: AuthUser, projectId: string): Promise<ProjectRow> {
+    const row = await this.visibleProjects(user).where('projects.id', projectId).first('projects.*');
+    if (!row) throw new NotFoundException('No such project');
+    return row;
+  }
+
+  /** For logging interviews: the project must exist in the organisation and be assigned to the interviewer. */
+  async findForInterviewer(user: AuthUser, projectId: string): Promise<ProjectRow> {
+    const row = await this.db('projects').where({ id: projectId, organisation_id: user.organisationId }).first();
+    if (!row) throw new NotFoundException('No such project');
+    const member = await this.db('project_members').where({ project_id: projectId, user_id: user.id }).first();
+    if (!member) throw new ForbiddenException('You are not assigned to this project; ask your supervisor to add you');
+    return row;
+  }
+}

@@ -1,0 +1,67 @@
+// Turns a project's quota variables, shares and sample size into stored cells with
+// whole-number targets (largest remainder, via the estimation core). Cells are matched
+// by their categories, so recomputing keeps each cell's id and its closed state.
+import { Inject, Injectable, Module } from '@nestjs/common';
+import type { Knex } from 'knex';
+import { KNEX } from '../database/database.constants.js';
+import type { QuotaCategoryRow, QuotaVariableRow } from '../database/tables.js';
+import { allocateQuotas } from '../estimation/quotas.js';
+
+export interface ActiveTargets {
+  variables: (QuotaVariableRow & { categories: QuotaCategoryRow[] })[];
+}
+
+export async function loadActiveTargets(db: Knex, projectId: string): Promise<ActiveTargets> {
+  const variables = await db('quota_variables').where({ project_id: projectId, retired: false }).orderBy('position');
+  const categories = await db('quota_categories').where({ project_id: projectId, retired: false }).orderBy('position');
+  return {
+    variables: variables.map((v) => ({ ...v, categories: categories.filter((c) => c.variable_id === v.id) })),
+  };
+}
+
+@Injectable()
+export class CellAllocator {
+  constructor(@Inject(KNEX) private readonly db: Knex) {}
+
+  async recompute(projectId: string, trx: Knex.Transaction): Promise<void> {
+    const project = await trx('projects').where({ id: projectId }).first();
+    const { variables } = await loadActiveTargets(trx, projectId);
+    if (!project || variables.length === 0) {
+      await trx('quota_cells').where({ project_id: projectId }).delete();
+      return;
+    }
+    const allocation = allocateQuotas(
+      variables.map((v) => ({ variable: v.name, shares: v.categories.map((c) => ({ category: c.label, share: c.share })) })),
+      project.target_size,
+      { interlock: variables.filter((v) => v.interlocked).map((v) => v.name) },
+    );
+    const categoryId = new Map<string, string>();
+    for (const v of variables) for (const c of v.categories) categoryId.set(JSON.stringify([v.name, c.label]), c.id);
+
+    const cells = allocation.sets.flatMap((set) =>
+      set.cells.map((cell) => {
+        const names = set.variables;
+        return {
+          project_id: projectId,
+          kind: variables.some((v) => v.interlocked && v.name === names[0]) ? 'interlocked' : 'margin',
+          category_ids: names.map((name) => categoryId.get(JSON.stringify([name, cell.categories[name]])) as string),
+          label: names.map((name) => `${name}: ${cell.categories[name]}`).join(' × '),
+          target: cell.target,
+        } as const;
+      }),
+    );
+    const keep = cells.map((c) => `{${c.category_ids.join(',')}}`);
+    await trx('quota_cells')
+      .where({ project_id: projectId })
+      .whereRaw('NOT (category_ids::text = ANY(?::text[]))', [keep])
+      .delete();
+    await trx('quota_cells')
+      .insert(cells.map((c, position) => ({ ...c, position })))
+      .onConflict(['project_id', 'category_ids'])
+      .merge(['kind', 'label', 'target', 'position']);
+    await trx('projects').where({ id: projectId }).update({ targets_updated_at: trx.fn.now() });
+  }
+}
+
+@Module({ providers: [CellAllocator], exports: [CellAllocator] })
+export class CellAllocatorModule {}

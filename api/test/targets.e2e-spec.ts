@@ -1,0 +1,157 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createOrg, startApp, type Harness, type TestOrg } from './harness.js';
+import { client, complete, pick, TARGETS, type Targets } from './fieldwork-helpers.js';
+
+let h: Harness;
+let org: TestOrg;
+let lead: Awaited<ReturnType<typeof client>>;
+let projectPath: string;
+
+beforeAll(async () => {
+  h = await startApp();
+  org = await createOrg(h.db, 'Targets');
+  lead = await client(h, org, 'lead');
+  projectPath = `/api/projects/${org.projectId}`;
+  await lead.patch(projectPath, { targetSize: 200, headlineQuestion: 'Do you support the plan?' });
+});
+afterAll(() => h.close());
+
+type Cell = { kind: string; label: string; target: number; categoryIds: string[] };
+
+describe('project set-up', () => {
+  it('creates a project with field dates, size and headline question', async () => {
+    const res = await lead.post('/api/projects', {
+      name: 'Harbour survey', fieldStart: '2026-12-01', fieldEnd: '2026-12-20', targetSize: 600, headlineQuestion: 'Keep the ferry?',
+    });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ name: 'Harbour survey', status: 'setup', targetSize: 600, fieldEnd: '2026-12-20' });
+  });
+
+  it('refuses a field end before the start, naming the field', async () => {
+    const res = await lead.post('/api/projects', {
+      name: 'Backwards', fieldStart: '2026-12-10', fieldEnd: '2026-12-01', targetSize: 10, headlineQuestion: 'x?',
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.fields).toEqual([{ field: 'fieldEnd', message: 'must not be before fieldStart' }]);
+  });
+
+  it('lets no supervisor or client create projects', async () => {
+    for (const role of ['supervisor', 'client', 'interviewer'] as const) {
+      const c = await client(h, org, role);
+      expect((await c.post('/api/projects', { name: 'x', fieldStart: '2026-12-01', fieldEnd: '2026-12-02', targetSize: 1, headlineQuestion: 'q' })).status).toBe(403);
+    }
+  });
+
+  it('assigns interviewers and supervisors, refusing unknown or foreign user ids', async () => {
+    const other = await createOrg(h.db, 'Elsewhere');
+    const ids = [org.users.interviewer.id, org.users.supervisor.id, org.users.client.id];
+    const res = await lead.put(`${projectPath}/members`, { userIds: ids });
+    expect(res.status).toBe(200);
+    expect(res.body.map((m: { role: string }) => m.role).sort()).toEqual(['client', 'interviewer', 'supervisor']);
+    const foreign = await lead.put(`${projectPath}/members`, { userIds: [...ids, other.users.interviewer.id] });
+    expect(foreign.status).toBe(400);
+    expect((await lead.get(`${projectPath}/members`)).body).toHaveLength(3);
+  });
+});
+
+describe('targets and cells', () => {
+  it('stores the targets and allocates whole-number cells that add up to the sample size', async () => {
+    const res = await lead.put(`${projectPath}/targets`, TARGETS);
+    expect(res.status).toBe(200);
+    const cells: Cell[] = (await lead.get(`${projectPath}/cells`)).body.cells;
+    const crossed = cells.filter((c) => c.kind === 'interlocked');
+    const margins = cells.filter((c) => c.kind === 'margin');
+    expect(crossed).toHaveLength(6);
+    expect(margins).toHaveLength(3);
+    // Largest-remainder allocation (common practice): each set sums exactly to the total,
+    // and each cell is within one of its exact expected count.
+    expect(crossed.reduce((s, c) => s + c.target, 0)).toBe(200);
+    expect(margins.reduce((s, c) => s + c.target, 0)).toBe(200);
+    const young = crossed.find((c) => c.label === 'age: 18-34 × sex: female')!;
+    expect(Math.abs(young.target - 200 * 0.3 * 0.52)).toBeLessThan(1);
+    expect(margins.find((c) => c.label === 'region: Coast')!.target).toBe(40);
+  });
+
+  it('reads an uploaded file with BOM, semicolons and decimal commas, saving nothing until asked', async () => {
+    const csv = '\uFEFFvariable;category;share\nage;18-34;0,3\nage;35+;0,7\nsex;female;52\nsex;male;48\n';
+    const before = (await lead.get(`${projectPath}/targets`)).body;
+    const res = await lead.upload(`${projectPath}/targets/parse`, csv, 'targets.csv', { interlock: 'age,sex' });
+    expect(res.status).toBe(200);
+    expect(res.body.variables).toEqual([
+      { name: 'age', interlocked: true, categories: [{ label: '18-34', share: 0.3 }, { label: '35+', share: 0.7 }] },
+      { name: 'sex', interlocked: true, categories: [{ label: 'female', share: 52 }, { label: 'male', share: 48 }] },
+    ]);
+    expect((await lead.get(`${projectPath}/targets`)).body).toEqual(before);
+  });
+
+  it.each([
+    ['negative share', 'variable,category,share\nage,young,0.5\nage,old,-0.1\n', 'line 3: variable age category "old": share "-0.1" is not a non-negative number'],
+    ['non-numeric share', 'variable,category,share\nage,young,half\n', 'line 2: variable age category "young": share "half" is not a non-negative number'],
+    ['all-zero shares', 'variable,category,share\nage,young,0\nage,old,0\n', 'line 2: variable age: all shares are zero'],
+    ['duplicate category', 'variable,category,share\nage,young,1\nage,old,1\nage,young,2\n', 'line 4: variable age category "young" is given twice (first on line 2)'],
+    ['wrong columns', 'var,cat,pct\nage,young,1\n', 'line 1: missing column "variable" (expected variable,category,share)'],
+    ['empty file', '', 'file is empty'],
+    ['header only', 'variable,category,share\n', 'no rows after the header line'],
+  ])('refuses a file with %s, naming the line', async (_case, csv, message) => {
+    const res = await lead.upload(`${projectPath}/targets/parse`, csv, 'bad.csv');
+    expect(res.status).toBe(400);
+    expect(res.body.message).toBe(`bad.csv: ${message}`);
+  });
+
+  it('refuses an interlock naming a variable the file lacks', async () => {
+    const res = await lead.upload(`${projectPath}/targets/parse`, 'variable,category,share\nage,a,1\nage,b,1\n', 't.csv', { interlock: 'age,income' });
+    expect(res.status).toBe(400);
+    expect(res.body.message).toBe('interlock: unknown variable income; the file has age');
+  });
+
+  it('refuses a file that is too large or not UTF-8', async () => {
+    const big = 'variable,category,share\n' + 'age,a,1\n'.repeat(40_000);
+    expect((await lead.upload(`${projectPath}/targets/parse`, big)).status).toBe(413);
+    const latin1 = Buffer.from('variable,category,share\nregion,K\xf6ln,1\n', 'latin1');
+    const res = await lead.upload(`${projectPath}/targets/parse`, latin1, 'latin.csv');
+    expect(res.status).toBe(400);
+    expect(res.body.message).toMatch(/not UTF-8/);
+  });
+
+  it('refuses invalid targets as a whole and changes nothing', async () => {
+    const before = (await lead.get(`${projectPath}/cells`)).body.cells;
+    const bad = { variables: [TARGETS.variables[0], { name: 'AGE', categories: [{ label: 'x', share: 1 }] }] };
+    const res = await lead.put(`${projectPath}/targets`, bad);
+    expect(res.status).toBe(400);
+    expect(res.body.message).toBe('variable AGE is given twice');
+    const negative = await lead.put(`${projectPath}/targets`, { variables: [{ name: 'age', categories: [{ label: 'a', share: -1 }] }] });
+    expect(negative.status).toBe(400);
+    expect(negative.body.fields[0].field).toBe('variables.0.categories.0.share');
+    expect((await lead.get(`${projectPath}/cells`)).body.cells).toEqual(before);
+  });
+
+  it('keeps interviews when targets change after fieldwork started, and recounts the new cells', async () => {
+    const targets: Targets = (await lead.get(`${projectPath}/targets`)).body;
+    const interviewer = await client(h, org, 'interviewer');
+    const batch = [
+      complete(pick(targets, { age: '18-34', sex: 'female', region: 'North' })),
+      complete(pick(targets, { age: '60+', sex: 'male', region: 'Coast' })),
+    ];
+    expect((await interviewer.post(`${projectPath}/interviews/sync`, { interviews: batch })).body.accepted).toBe(2);
+    // Region is dropped and education added; age shares change.
+    const edited = {
+      variables: [
+        { ...TARGETS.variables[0], categories: [{ label: '18-34', share: 0.25 }, { label: '35-59', share: 0.45 }, { label: '60+', share: 0.3 }] },
+        TARGETS.variables[1],
+      ],
+    };
+    expect((await lead.put(`${projectPath}/targets`, edited)).status).toBe(200);
+    const cells: (Cell & { achieved: number })[] = (await lead.get(`${projectPath}/cells`)).body.cells;
+    expect(cells).toHaveLength(6);
+    expect(cells.find((c) => c.label === 'age: 18-34 × sex: female')!.achieved).toBe(1);
+    expect(cells.find((c) => c.label === 'age: 60+ × sex: male')!.achieved).toBe(1);
+    expect(Number((await h.db('interviews').where({ project_id: org.projectId }).count({ n: '*' }))[0]!.n)).toBe(2);
+  });
+
+  it('lets no interviewer or client change targets', async () => {
+    for (const role of ['interviewer', 'client'] as const) {
+      const c = await client(h, org, role);
+      expect((await c.put(`${projectPath}/targets`, TARGETS)).status).toBe(403);
+    }
+  });
+});

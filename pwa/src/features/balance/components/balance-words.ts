@@ -1,0 +1,26 @@
+// How the balance figures are put into words. Shares are proportions in the code and
+// percentages on screen (DESIGN.md section 3).
+import { formatDecimal, formatPercent } from '../../../lib/format';
+
+/** A margin of error (a proportion) → "±4.8 pts" (percentage points). */
+export function formatMarginOfError(moe: number): string {
+  return `±${(moe * 100).toFixed(1)} pts`;
+}
+
+/** A bias factor → three decimals, e.g. "0.503". */
+export function formatBiasFactor(b: number): string {
+  return formatDecimal(b, 3);
+}
+
+/**
+ * What the implied bias factor says about the raw sample. b = 0.5 is no pull; above 0.5
+ * the raw (unweighted) sample overstates the headline share, below it understates it. Only
+ * an interval that excludes 0.5 is read as a clear pull.
+ */
+export function biasSentence(interval: [number, number], unweighted: number, weighted: number): string {
+  const [low, high] = interval;
+  const shares = `${formatPercent(unweighted)} before weighting, ${formatPercent(weighted)} after`;
+  if (low > 0.5) return `The raw sample overstates the headline share (${shares}): the whole interval lies above 0.5.`;
+  if (high < 0.5) return `The raw sample understates the headline share (${shares}): the whole interval lies below 0.5.`;
+  return `No clear pull either way so far (${shares}): the interval includes 0.5.`;
+}

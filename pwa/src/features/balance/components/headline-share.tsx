@@ -1,0 +1,46 @@
+import { formatPercent } from '../../../lib/format';
+import type { Balance } from '../api/get-balance';
+import { biasSentence, formatBiasFactor } from './balance-words';
+
+/** The headline share before and after weighting, and how hard the sample's mix pulls it. */
+export function HeadlineShare({ balance }: { balance: Balance }) {
+  const outcome = balance.outcome;
+  if (!outcome) {
+    return <p className="pl-muted">The headline share appears with the first completed interviews.</p>;
+  }
+  const interval = outcome.impliedBiasFactorInterval ?? null;
+  const b = outcome.impliedBiasFactor ?? null;
+  return (
+    <>
+      <p className="pl-headline-question">“{balance.headlineQuestion}”</p>
+      <dl className="pl-figures" aria-label="Headline figures">
+        <div>
+          <dt>Yes, unweighted</dt>
+          <dd className="pl-figure">{formatPercent(outcome.unweighted)}</dd>
+        </div>
+        <div>
+          <dt>Yes, weighted</dt>
+          <dd className="pl-figure">{outcome.weighted === undefined ? '—' : formatPercent(outcome.weighted)}</dd>
+        </div>
+        <div>
+          <dt>Implied bias factor</dt>
+          <dd className="pl-figure">{b === null ? '—' : formatBiasFactor(b)}</dd>
+        </div>
+        <div>
+          <dt>Its 95% interval</dt>
+          <dd className="pl-figure">
+            {interval ? `${formatBiasFactor(interval[0])} – ${formatBiasFactor(interval[1])}` : '—'}
+          </dd>
+        </div>
+      </dl>
+      {interval && outcome.weighted !== undefined ? (
+        <p className="pl-bias-sentence">{biasSentence(interval, outcome.unweighted, outcome.weighted)}</p>
+      ) : null}
+      <p className="pl-small pl-muted">
+        The implied bias factor is the share the raw sample would show if, after weighting, the answer split 50/50.
+        0.5 means the sample’s mix does not pull the headline share at all; above 0.5 the raw sample says “yes” more
+        often than the weighted figure, below 0.5 less often.
+      </p>
+    </>
+  );
+}

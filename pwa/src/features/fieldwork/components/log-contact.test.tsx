@@ -1,0 +1,101 @@
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { db, type InterviewRecord } from '../../../db/plumbline-db';
+import { installFakeApi } from '../../../test/fake-api';
+import { cell, completeEntry, syncedBefore, tramCells } from '../../../test/field-fixtures';
+import { renderApp, signedInAs } from '../../../test/render-app';
+import { whenSyncIdle } from '../../../sync/sync-engine';
+
+const me = 'user-interviewer';
+
+function setOnline(online: boolean) {
+  Object.defineProperty(navigator, 'onLine', { configurable: true, get: () => online });
+}
+
+beforeEach(async () => {
+  // Offline: the screen must work from the device alone, and no sync interferes.
+  setOnline(false);
+  installFakeApi();
+  await signedInAs('interviewer');
+});
+
+afterEach(async () => {
+  await whenSyncIdle();
+  setOnline(true);
+});
+
+async function startComplete(age: string, region: string) {
+  const user = userEvent.setup();
+  renderApp('/interviewer');
+  await user.click(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' }));
+  expect(screen.getByText(/Record no names, addresses or phone numbers/)).toBeInTheDocument();
+  await user.click(screen.getByRole('button', { name: 'Complete' }));
+  await user.click(within(screen.getByRole('radiogroup', { name: 'Age band' })).getByRole('radio', { name: age }));
+  await user.click(within(screen.getByRole('radiogroup', { name: 'Region' })).getByRole('radio', { name: region }));
+  await user.click(screen.getByRole('button', { name: 'Check their cells' }));
+  return user;
+}
+
+describe('logging a contact', () => {
+  it('asks for confirmation before an interview in a full cell, then saves it to the outbox', async () => {
+    await syncedBefore(me, [cell('cell-young', 'age_band: 18-34', ['c-young'], 50, 50), ...tramCells.slice(1)]);
+    const user = await startComplete('18-34', 'Mardon');
+
+    expect(screen.getByRole('alert')).toHaveTextContent('One of their cells is full or closed');
+    await user.click(screen.getByRole('button', { name: 'Start the interview' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Interview in a full cell?' });
+    expect(dialog).toHaveTextContent('age band: 18-34 is full');
+    expect(dialog).toHaveTextContent('counted as over quota');
+    await user.click(within(dialog).getByRole('button', { name: 'Interview anyway' }));
+
+    expect(screen.getByText('Do you support extending the tram line?')).toBeInTheDocument();
+    await user.click(screen.getByRole('radio', { name: 'Yes' }));
+    await user.click(screen.getByRole('button', { name: 'Save interview' }));
+
+    expect(await screen.findByText(/Complete saved on this device/)).toBeInTheDocument();
+    const [entry] = await db.outbox.toArray();
+    const record = entry!.payload as InterviewRecord;
+    expect(record).toMatchObject({ disposition: 'complete', categories: { 'v-age': 'c-young', 'v-region': 'c-mardon' }, headlineAnswer: true });
+    expect(record.id).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
+    expect(Date.parse(record.endedAt)).toBeGreaterThanOrEqual(Date.parse(record.startedAt));
+    expect(Object.keys(record).sort()).toEqual(['categories', 'disposition', 'endedAt', 'headlineAnswer', 'id', 'startedAt']);
+  });
+
+  it('counts this device’s unsent completes: the last place taken offline makes the cell full', async () => {
+    await syncedBefore(me); // 18-34 has one place left at the last sync
+    await db.outbox.add(completeEntry(1, me, { 'v-age': 'c-young', 'v-region': 'c-quay' }));
+    const user = await startComplete('18-34', 'Mardon');
+
+    const theirCells = screen.getByRole('list', { name: 'The respondent’s cells' });
+    expect(within(theirCells).getByText('Full')).toBeInTheDocument();
+    expect(within(theirCells).getAllByRole('listitem')[0]).toHaveTextContent('age band: 18-34Full0 of 50 left');
+    await user.click(screen.getByRole('button', { name: 'Start the interview' }));
+    expect(await screen.findByRole('dialog', { name: 'Interview in a full cell?' })).toBeInTheDocument();
+  });
+
+  it('goes straight to the headline question when the respondent’s cells are open', async () => {
+    await syncedBefore(me);
+    const user = await startComplete('35+', 'Old Quay');
+
+    expect(screen.getByText('All their cells are open.')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Start the interview' }));
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+    expect(screen.getByText('Do you support extending the tram line?')).toBeInTheDocument();
+  });
+
+  it('saves a refusal in two taps, with no categories or answer', async () => {
+    await syncedBefore(me);
+    const user = userEvent.setup();
+    renderApp('/interviewer');
+    await user.click(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' }));
+    await user.click(screen.getByRole('button', { name: 'Refusal' }));
+    await user.click(screen.getByRole('button', { name: 'Save refusal' }));
+
+    expect(await screen.findByText(/Refusal saved on this device/)).toBeInTheDocument();
+    expect(screen.getByText(/goes to the office when the network is back/)).toBeInTheDocument();
+    const [entry] = await db.outbox.toArray();
+    expect(Object.keys(entry!.payload as object).sort()).toEqual(['disposition', 'endedAt', 'id', 'startedAt']);
+    expect(entry!.interviewerId).toBe(me);
+  });
+});

@@ -1,0 +1,139 @@
+// Logs one contact in a few taps: outcome; for a complete the respondent's categories, a
+// look at their cells before the interview proper, then the headline answer. startedAt is
+// the moment this screen opened, endedAt the moment of saving; the record goes to the
+// device's outbox first (sync/log-contact), whatever the network.
+import { useEffect, useMemo, useRef, useState } from 'react';
+import type { Disposition, FieldProject } from '../../../db/plumbline-db';
+import { dispositionWords } from '../../../lib/fieldwork-words';
+import { respondentCells } from '../../../sync/cell-status';
+import { logContact } from '../../../sync/log-contact';
+import type { ProjectCellStatus } from '../hooks/use-field-status';
+import { AnswerStep } from './answer-step';
+import { CategoriesStep } from './categories-step';
+import { CellCheckStep } from './cell-check-step';
+import { OutcomeStep } from './outcome-step';
+
+type Step = 'outcome' | 'confirm' | 'categories' | 'check' | 'answer';
+
+interface LogContactProps {
+  userId: string;
+  project: FieldProject;
+  status: ProjectCellStatus | undefined;
+  onSaved: (message: string) => void;
+  onCancel: () => void;
+}
+
+export function LogContact({ userId, project, status, onSaved, onCancel }: LogContactProps) {
+  const [startedAt] = useState(() => new Date().toISOString());
+  const [step, setStep] = useState<Step>('outcome');
+  const [disposition, setDisposition] = useState<Disposition>('complete');
+  const [categories, setCategories] = useState<Record<string, string>>({});
+  const [answer, setAnswer] = useState<boolean>();
+  const [saving, setSaving] = useState(false);
+  const [problem, setProblem] = useState<string>();
+  const variables = status?.variables ?? [];
+  const top = useRef<HTMLDivElement>(null);
+
+  // Each step starts at the top of the screen, with the project name in view.
+  useEffect(() => {
+    const content = top.current?.closest('ion-content') as (HTMLElement & { scrollToTop?: (ms?: number) => Promise<void> }) | null;
+    void content?.scrollToTop?.(0);
+  }, [step]);
+
+  const theirCells = useMemo(
+    () => respondentCells(status?.cells ?? [], Object.values(categories)),
+    [status, categories],
+  );
+
+  async function save(chosen: Disposition) {
+    setSaving(true);
+    setProblem(undefined);
+    try {
+      await logContact(userId, project.id, {
+        disposition: chosen,
+        startedAt,
+        ...(chosen === 'complete' ? { categories, headlineAnswer: answer } : {}),
+      });
+      onSaved(`${dispositionWords[chosen]} saved on this device.`);
+    } catch (error) {
+      setSaving(false);
+      setProblem(`Could not save on this device: ${error instanceof Error ? error.message : 'unknown problem'}. Nothing was stored; please try again.`);
+    }
+  }
+
+  function choose(chosen: Disposition) {
+    setDisposition(chosen);
+    setStep(chosen === 'complete' ? 'categories' : 'confirm');
+  }
+
+  return (
+    <div className="pl-log" ref={top}>
+      <div className="pl-log-head">
+        <p className="pl-log-project">{project.name}</p>
+        <button type="button" className="pl-button pl-button-quiet" onClick={onCancel}>
+          Cancel
+        </button>
+      </div>
+      <p className="pl-muted pl-small pl-privacy">
+        Record no names, addresses or phone numbers: only categories, the answer and times.
+      </p>
+      {problem ? (
+        <p className="pl-form-problem" role="alert">
+          {problem}
+        </p>
+      ) : null}
+
+      {step === 'outcome' ? <OutcomeStep onChoose={choose} /> : null}
+
+      {step === 'confirm' ? (
+        <section aria-labelledby="pl-confirm-title">
+          <h2 id="pl-confirm-title" className="pl-step-title">
+            {dispositionWords[disposition]}
+          </h2>
+          <div className="pl-step-actions">
+            <button type="button" className="pl-button pl-button-main pl-button-wide" disabled={saving} onClick={() => void save(disposition)}>
+              Save {dispositionWords[disposition].toLowerCase()}
+            </button>
+            <button type="button" className="pl-button pl-button-quiet pl-button-wide" onClick={() => setStep('outcome')}>
+              Choose another outcome
+            </button>
+          </div>
+        </section>
+      ) : null}
+
+      {step === 'categories' && variables.length === 0 ? (
+        <section className="pl-form-note" role="status">
+          <p>
+            To log a complete this device needs the project’s quota variables from one sync with the network. Other
+            outcomes can be logged now.
+          </p>
+          <button type="button" className="pl-button pl-button-quiet" onClick={() => setStep('outcome')}>
+            Choose another outcome
+          </button>
+        </section>
+      ) : null}
+
+      {step === 'categories' && variables.length > 0 ? (
+        <CategoriesStep
+          variables={variables}
+          chosen={categories}
+          onChange={(variableId, categoryId) => setCategories((c) => ({ ...c, [variableId]: categoryId }))}
+          onNext={() => setStep('check')}
+        />
+      ) : null}
+
+      {step === 'check' ? (
+        <CellCheckStep
+          cells={theirCells}
+          syncedAt={status?.syncedAt ?? null}
+          onStart={() => setStep('answer')}
+          onBack={() => setStep('categories')}
+        />
+      ) : null}
+
+      {step === 'answer' ? (
+        <AnswerStep question={project.headlineQuestion} answer={answer} onAnswer={setAnswer} saving={saving} onSave={() => void save('complete')} />
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,35 @@
+// GET /api/projects/:id/cells: the cell targets the server allocated from the quota targets.
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+
+export interface ProjectCell {
+  id: string;
+  kind: 'interlocked' | 'margin';
+  label: string;
+  target: number;
+  achieved: number;
+  status: 'open' | 'nearly_full' | 'full' | 'closed';
+}
+
+export interface ProjectCells {
+  variables: { id: string; name: string; interlocked: boolean }[];
+  cells: ProjectCell[];
+  refreshedAt: string;
+}
+
+export const cellKeys = {
+  all: ['cells'] as const,
+  project: (projectId: string) => [...cellKeys.all, projectId] as const,
+};
+
+export function getCells(projectId: string, signal?: AbortSignal): Promise<ProjectCells> {
+  return apiRequest<ProjectCells>(`/projects/${projectId}/cells`, { signal });
+}
+
+export function cellsQueryOptions(projectId: string) {
+  return queryOptions({ queryKey: cellKeys.project(projectId), queryFn: ({ signal }) => getCells(projectId, signal) });
+}
+
+export function useCells(projectId: string) {
+  return useQuery(cellsQueryOptions(projectId));
+}

@@ -1,0 +1,28 @@
+// GET /api/projects/:id/members: who is assigned to the project.
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import type { Role } from '../../../config/roles';
+
+export interface Member {
+  id: string;
+  name: string;
+  email: string;
+  role: Role;
+}
+
+export const memberKeys = {
+  all: ['members'] as const,
+  project: (projectId: string) => [...memberKeys.all, projectId] as const,
+};
+
+export function getMembers(projectId: string, signal?: AbortSignal): Promise<Member[]> {
+  return apiRequest<Member[]>(`/projects/${projectId}/members`, { signal });
+}
+
+export function membersQueryOptions(projectId: string) {
+  return queryOptions({ queryKey: memberKeys.project(projectId), queryFn: ({ signal }) => getMembers(projectId, signal) });
+}
+
+export function useMembers(projectId: string) {
+  return useQuery(membersQueryOptions(projectId));
+}

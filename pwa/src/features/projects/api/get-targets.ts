@@ -1,0 +1,36 @@
+// GET /api/projects/:id/targets: the quota variables, categories and population shares.
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+
+export interface TargetCategory {
+  label: string;
+  /** Population share: any non-negative numbers; the server normalises them per variable. */
+  share: number;
+}
+
+export interface TargetVariable {
+  name: string;
+  interlocked?: boolean;
+  categories: TargetCategory[];
+}
+
+export interface Targets {
+  variables: TargetVariable[];
+}
+
+export const targetKeys = {
+  all: ['targets'] as const,
+  project: (projectId: string) => [...targetKeys.all, projectId] as const,
+};
+
+export function getTargets(projectId: string, signal?: AbortSignal): Promise<Targets> {
+  return apiRequest<Targets>(`/projects/${projectId}/targets`, { signal });
+}
+
+export function targetsQueryOptions(projectId: string) {
+  return queryOptions({ queryKey: targetKeys.project(projectId), queryFn: ({ signal }) => getTargets(projectId, signal) });
+}
+
+export function useTargets(projectId: string) {
+  return useQuery(targetsQueryOptions(projectId));
+}

@@ -1,0 +1,47 @@
+import { QueryView } from '../../../components/query-view';
+import { EmptyPanel } from '../../../components/state-panels';
+import { formatCount } from '../../../lib/format';
+import { useCells } from '../api/get-cells';
+
+/** The cell targets the server allocated (whole numbers that add up to the sample size). */
+export function CellTargets({ projectId }: { projectId: string }) {
+  const cells = useCells(projectId);
+  return (
+    <QueryView
+      query={cells}
+      what="cells"
+      offlineNote="The cells need the network."
+      isEmpty={(data) => data.cells.length === 0}
+      empty={
+        <EmptyPanel title="No cells yet">
+          <p>Save quota targets to see the cell targets.</p>
+        </EmptyPanel>
+      }
+    >
+      {(data) => (
+        <div className="pl-table-wrap">
+          <table className="pl-table" aria-label="Cell targets">
+            <thead>
+              <tr>
+                <th scope="col">Cell</th>
+                <th scope="col">Kind</th>
+                <th scope="col" className="is-numeric">Target</th>
+                <th scope="col" className="is-numeric">Achieved</th>
+              </tr>
+            </thead>
+            <tbody>
+              {data.cells.map((cell) => (
+                <tr key={cell.id}>
+                  <th scope="row">{cell.label}</th>
+                  <td>{cell.kind === 'interlocked' ? 'Interlocked' : 'Margin'}</td>
+                  <td className="is-numeric pl-figure">{formatCount(cell.target)}</td>
+                  <td className="is-numeric pl-figure">{formatCount(cell.achieved)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </QueryView>
+  );
+}

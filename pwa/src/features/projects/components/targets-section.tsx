@@ -1,0 +1,109 @@
+import { useState } from 'react';
+import { QueryView } from '../../../components/query-view';
+import type { Project } from '../../../lib/projects/get-projects';
+import { useTargets, type Targets } from '../api/get-targets';
+import { useSaveTargets } from '../api/save-targets';
+import { CellTargets } from './cell-targets';
+import { blankVariable, checkDraftTargets, draftFrom, type DraftVariable } from './targets-draft';
+import { TargetsUpload } from './targets-upload';
+import { VariableEditor } from './variable-editor';
+
+/** Quota targets: typed in or read from a file, reviewed, then saved as a whole. */
+export function TargetsSection({ project }: { project: Project }) {
+  const targets = useTargets(project.id);
+  return (
+    <QueryView query={targets} what="quota targets" offlineNote="The quota targets need the network." isEmpty={() => false} empty={null}>
+      {(saved) => <TargetsEditor project={project} saved={saved} />}
+    </QueryView>
+  );
+}
+
+function TargetsEditor({ project, saved }: { project: Project; saved: Targets }) {
+  const save = useSaveTargets(project.id);
+  const [draft, setDraft] = useState<DraftVariable[]>(() => (saved.variables.length ? draftFrom(saved, 100) : [blankVariable()]));
+  const [fromFile, setFromFile] = useState<string | null>(null);
+  const [problems, setProblems] = useState<string[]>([]);
+  const [savedNote, setSavedNote] = useState(false);
+  const interlocked = draft.filter((v) => v.interlocked).map((v) => v.name.trim() || 'unnamed');
+
+  const change = (next: DraftVariable[]) => {
+    setDraft(next);
+    setSavedNote(false);
+  };
+  const submit = () => {
+    const checked = checkDraftTargets(draft);
+    setProblems(checked.problems);
+    if (!checked.targets) return;
+    save.mutate(checked.targets, {
+      onSuccess: () => {
+        setFromFile(null);
+        setSavedNote(true);
+      },
+    });
+  };
+
+  return (
+    <>
+      {project.status !== 'setup' ? (
+        <p className="pl-form-note">
+          Fieldwork has started. Saving new targets recomputes the cells; every interview already logged is kept.
+        </p>
+      ) : null}
+      <TargetsUpload
+        projectId={project.id}
+        onRead={(targets, name) => {
+          change(draftFrom(targets, 1));
+          setFromFile(name);
+        }}
+      />
+      {fromFile ? (
+        <p className="pl-form-note" role="status">
+          Read from {fromFile}: {draft.length} variables. Nothing is saved yet: check the figures below, tick the variables
+          to interlock, then save.
+        </p>
+      ) : null}
+      <div className="pl-variables">
+        {draft.map((variable, index) => (
+          <VariableEditor
+            key={variable.key}
+            variable={variable}
+            position={index + 1}
+            onChange={(next) => change(draft.map((v) => (v.key === variable.key ? next : v)))}
+            onRemove={() => change(draft.filter((v) => v.key !== variable.key))}
+          />
+        ))}
+      </div>
+      <p className="pl-small">
+        {interlocked.length >= 2
+          ? `Interlocked: ${interlocked.join(' × ')}; every other variable is a margin quota.`
+          : 'No variables interlocked: every variable is a margin quota.'}
+      </p>
+      {problems.length > 0 || save.error ? (
+        <div className="pl-form-problem" role="alert">
+          <p>Not saved:</p>
+          <ul>
+            {problems.map((problem) => (
+              <li key={problem}>{problem}</li>
+            ))}
+            {save.error ? <li>{save.error.message}</li> : null}
+          </ul>
+        </div>
+      ) : null}
+      <div className="pl-form-actions">
+        <button type="button" className="pl-button pl-button-quiet" onClick={() => change([...draft, blankVariable()])}>
+          Add a variable
+        </button>
+        <button type="button" className="pl-button pl-button-main" onClick={submit} disabled={save.isPending}>
+          {save.isPending ? 'Saving…' : 'Save targets'}
+        </button>
+      </div>
+      {savedNote ? (
+        <p className="pl-saved" role="status">
+          Targets saved; the cell targets below are recomputed.
+        </p>
+      ) : null}
+      <h3 className="pl-subsection-title">Cell targets</h3>
+      <CellTargets projectId={project.id} />
+    </>
+  );
+}

@@ -1,0 +1,182 @@
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import { installFakeApi, json, type FakeApi } from '../../../test/fake-api';
+import { renderApp, signedInAs } from '../../../test/render-app';
+
+const project = {
+  id: 'p9',
+  name: 'Kestle Vale bus survey',
+  topic: 'Bus timetable changes',
+  fieldStart: '2027-01-11',
+  fieldEnd: '2027-01-31',
+  targetSize: 400,
+  status: 'setup',
+  headlineQuestion: 'Would you use an hourly evening bus?',
+};
+
+const people = [
+  { id: 'u1', name: 'Alys Fenwick', email: 'a@x', role: 'interviewer', createdAt: '2026-01-01' },
+  { id: 'u2', name: 'Rhea Quillon', email: 's@x', role: 'supervisor', createdAt: '2026-01-01' },
+  { id: 'u3', name: 'Vellmoor Transit Board', email: 'c@x', role: 'client', createdAt: '2026-01-01' },
+];
+
+function projectApi(status = 'setup'): FakeApi {
+  const api = installFakeApi();
+  api.on('GET', '/api/projects/p9', () => json({ ...project, status }));
+  api.on('GET', '/api/projects/p9/targets', () => json({ variables: [] }));
+  api.on('GET', '/api/projects/p9/cells', () => json({ variables: [], cells: [], refreshedAt: '2026-12-02T10:00:00Z' }));
+  api.on('GET', '/api/projects/p9/members', () => json([]));
+  api.on('GET', '/api/users', () => json(people));
+  return api;
+}
+
+const csv = () => new File(['variable,category,share\nage_band,18-34,30\n'], 'targets.csv', { type: 'text/csv' });
+
+describe('quota targets from a CSV file', () => {
+  it("shows the server's reason with its line and saves nothing", async () => {
+    const api = projectApi();
+    api.on('POST', '/api/projects/p9/targets/parse', () =>
+      json({ statusCode: 400, message: 'targets.csv line 4: share "abc" is not a number', fields: [{ field: 'file', message: 'x' }] }, 400),
+    );
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.upload(await screen.findByLabelText('Targets file (CSV: variable,category,share)'), csv());
+    await user.click(screen.getByRole('button', { name: 'Read file' }));
+
+    const alert = await screen.findByRole('alert');
+    expect(alert).toHaveTextContent('The file was not read, and nothing changed');
+    expect(alert).toHaveTextContent('targets.csv line 4: share "abc" is not a number');
+    expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
+  });
+
+  it('loads the file into the form for review, then saves it with the chosen interlock and shows the cells', async () => {
+    const api = projectApi('fieldwork');
+    api.on('POST', '/api/projects/p9/targets/parse', () =>
+      json({
+        variables: [
+          { name: 'age_band', interlocked: false, categories: [{ label: '18-34', share: 30 }, { label: '35+', share: 70 }] },
+          { name: 'sex', interlocked: false, categories: [{ label: 'female', share: 51 }, { label: 'male', share: 49 }] },
+        ],
+      }),
+    );
+    api.on('PUT', '/api/projects/p9/targets', ({ body }) => {
+      api.on('GET', '/api/projects/p9/cells', () =>
+        json({
+          variables: [],
+          refreshedAt: '2026-12-02T10:00:00Z',
+          cells: [
+            { id: 'c1', kind: 'interlocked', label: 'age_band: 18-34 × sex: female', target: 61, achieved: 0, status: 'open' },
+            { id: 'c2', kind: 'interlocked', label: 'age_band: 18-34 × sex: male', target: 59, achieved: 0, status: 'open' },
+          ],
+        }),
+      );
+      return json(body);
+    });
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    expect(await screen.findByText(/Fieldwork has started\. Saving new targets recomputes the cells; every interview already logged is kept/)).toBeInTheDocument();
+    await user.upload(screen.getByLabelText('Targets file (CSV: variable,category,share)'), csv());
+    await user.click(screen.getByRole('button', { name: 'Read file' }));
+
+    expect(await screen.findByText(/Read from targets\.csv: 2 variables\. Nothing is saved yet/)).toBeInTheDocument();
+    expect(screen.getByLabelText('sex: share of female')).toHaveValue('51');
+    expect(screen.getByText(/Total of age_band:/)).toHaveTextContent('100.00');
+    expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
+
+    await user.click(screen.getByLabelText('Interlock age_band'));
+    await user.click(screen.getByLabelText('Interlock sex'));
+    expect(screen.getByText('Interlocked: age_band × sex; every other variable is a margin quota.')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Save targets' }));
+
+    const cells = await screen.findByRole('table', { name: 'Cell targets' });
+    expect(within(cells).getByRole('row', { name: /18-34 × sex: female/ })).toHaveTextContent('61');
+    const put = api.calls.find((c) => c.method === 'PUT');
+    expect(put?.body).toEqual({
+      variables: [
+        { name: 'age_band', interlocked: true, categories: [{ label: '18-34', share: 30 }, { label: '35+', share: 70 }] },
+        { name: 'sex', interlocked: true, categories: [{ label: 'female', share: 51 }, { label: 'male', share: 49 }] },
+      ],
+    });
+  });
+});
+
+describe('quota targets typed in', () => {
+  it('refuses a lone interlocked variable and a share that is not a number, and sends nothing', async () => {
+    const api = projectApi();
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.type(await screen.findByPlaceholderText('e.g. age_band'), 'region');
+    await user.type(screen.getByLabelText('region: category 1'), 'Harrowby');
+    await user.type(screen.getByLabelText('region: share of Harrowby'), 'lots');
+    await user.type(screen.getByLabelText('region: category 2'), 'Mardon');
+    await user.type(screen.getByLabelText('region: share of Mardon'), '40');
+    await user.click(screen.getByLabelText('Interlock region'));
+    await user.click(screen.getByRole('button', { name: 'Save targets' }));
+
+    const alert = screen.getByRole('alert');
+    expect(alert).toHaveTextContent('region: the share of “Harrowby” must be a number.');
+    expect(alert).toHaveTextContent('Interlock at least two variables, or none.');
+    expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
+  });
+});
+
+describe('the team', () => {
+  it("assigns the agency's people by role", async () => {
+    const api = projectApi();
+    api.on('PUT', '/api/projects/p9/members', ({ body }) =>
+      json(people.filter((p) => (body as { userIds: string[] }).userIds.includes(p.id))),
+    );
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    const interviewers = await screen.findByRole('group', { name: /Interviewers/ });
+    await user.click(within(interviewers).getByLabelText('Alys Fenwick'));
+    await user.click(within(screen.getByRole('group', { name: /Clients/ })).getByLabelText('Vellmoor Transit Board'));
+    await user.click(screen.getByRole('button', { name: 'Save team' }));
+
+    expect(await screen.findByText('Team saved.')).toBeInTheDocument();
+    expect(api.calls.find((c) => c.method === 'PUT')?.body).toEqual({ userIds: ['u1', 'u3'] });
+  });
+});
+
+describe('a new project', () => {
+  it('says what is missing and sends nothing, then creates the project and opens it', async () => {
+    const api = projectApi();
+    api.on('GET', '/api/projects', () => json([]));
+    api.on('POST', '/api/projects', () => json(project, 201));
+    await signedInAs('lead');
+    renderApp('/lead');
+    const user = userEvent.setup();
+
+    await user.click(await screen.findByRole('link', { name: 'New project' }));
+    await user.click(await screen.findByRole('button', { name: 'Create project' }));
+    expect(screen.getByText('Give the project a name.')).toBeInTheDocument();
+    expect(screen.getByText('Enter a whole number of interviews, at least 1.')).toBeInTheDocument();
+    expect(api.calls.some((c) => c.method === 'POST')).toBe(false);
+
+    await user.type(screen.getByLabelText('Project name'), 'Kestle Vale bus survey');
+    await user.type(screen.getByLabelText('Field start'), '2027-01-11');
+    await user.type(screen.getByLabelText('Field end'), '2027-01-31');
+    await user.type(screen.getByLabelText('Target sample size'), '400');
+    await user.type(screen.getByLabelText('Headline question'), 'Would you use an hourly evening bus?');
+    await user.click(screen.getByRole('button', { name: 'Create project' }));
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Kestle Vale bus survey' })).toBeInTheDocument();
+    expect(window.location.pathname).toBe('/lead/projects/p9');
+    expect(api.calls.find((c) => c.method === 'POST')?.body).toEqual({
+      name: 'Kestle Vale bus survey',
+      fieldStart: '2027-01-11',
+      fieldEnd: '2027-01-31',
+      targetSize: 400,
+      headlineQuestion: 'Would you use an hourly evening bus?',
+    });
+  });
+});

@@ -1,0 +1,72 @@
+import '../components/project-setup.css';
+import { Link, useParams } from 'react-router-dom';
+import { PageFrame } from '../../../components/page-frame';
+import { QueryView } from '../../../components/query-view';
+import { rememberProject } from '../../../lib/projects/chosen-project';
+import { formatCalendarDate, formatCount } from '../../../lib/format';
+import { useProject } from '../api/get-project';
+import { StatusControl } from '../components/status-control';
+import { TargetsSection } from '../components/targets-section';
+import { TeamSection } from '../components/team-section';
+
+/** One project, for its lead: stage, quota targets and cells, and the team. */
+export function ProjectPage() {
+  const { projectId = '' } = useParams();
+  const project = useProject(projectId);
+  return (
+    <PageFrame title={project.data?.name ?? 'Project'}>
+      <p>
+        <Link to="/lead" className="pl-back-link">
+          ← All projects
+        </Link>
+      </p>
+      <QueryView query={project} what="the project" offlineNote="The project needs the network. It will load as soon as you are back online." isEmpty={() => false} empty={null}>
+        {(p) => (
+          <>
+            {p.topic ? <p className="pl-page-lead">{p.topic}</p> : null}
+            <dl className="pl-facts">
+              <div>
+                <dt>Field dates</dt>
+                <dd>
+                  {formatCalendarDate(p.fieldStart)} – {formatCalendarDate(p.fieldEnd)}
+                </dd>
+              </div>
+              <div>
+                <dt>Target sample</dt>
+                <dd>
+                  <span className="pl-figure">{formatCount(p.targetSize)}</span> interviews
+                </dd>
+              </div>
+              {p.headlineQuestion ? (
+                <div>
+                  <dt>Headline question</dt>
+                  <dd>{p.headlineQuestion}</dd>
+                </div>
+              ) : null}
+            </dl>
+            <p className="pl-project-links">
+              <Link to={`/lead/projects/${p.id}/quota-board`} className="pl-back-link">
+                Quota board →
+              </Link>
+              <Link to="/lead/balance" className="pl-back-link" onClick={() => rememberProject(p.id)}>
+                Balance →
+              </Link>
+            </p>
+            <section className="pl-section" aria-labelledby="pl-stage-heading">
+              <h2 id="pl-stage-heading" className="pl-section-title">Stage</h2>
+              <StatusControl project={p} />
+            </section>
+            <section className="pl-section" aria-labelledby="pl-targets-heading">
+              <h2 id="pl-targets-heading" className="pl-section-title">Quota targets</h2>
+              <TargetsSection project={p} />
+            </section>
+            <section className="pl-section" aria-labelledby="pl-team-heading">
+              <h2 id="pl-team-heading" className="pl-section-title">Team</h2>
+              <TeamSection projectId={p.id} />
+            </section>
+          </>
+        )}
+      </QueryView>
+    </PageFrame>
+  );
+}

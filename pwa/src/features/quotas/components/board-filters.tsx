@@ -1,0 +1,56 @@
+import { useId } from 'react';
+import type { BoardView, StatusFilter } from './board-view';
+
+const statusChoices: { value: StatusFilter; label: string }[] = [
+  { value: 'all', label: 'All cells' },
+  { value: 'open', label: 'Open' },
+  { value: 'nearly_full', label: 'Nearly full' },
+  { value: 'full', label: 'Full' },
+  { value: 'closed', label: 'Closed' },
+  { value: 'over_quota', label: 'Over quota' },
+];
+
+interface BoardFiltersProps {
+  view: BoardView;
+  onChange: (view: BoardView) => void;
+  shown: number;
+  total: number;
+}
+
+export function BoardFilters({ view, onChange, shown, total }: BoardFiltersProps) {
+  const statusId = useId();
+  const textId = useId();
+  return (
+    <div className="pl-filters" role="search" aria-label="Filter cells">
+      <div className="pl-filter">
+        <label htmlFor={statusId}>Status</label>
+        <select
+          id={statusId}
+          className="pl-select"
+          value={view.status}
+          onChange={(event) => onChange({ ...view, status: event.target.value as StatusFilter })}
+        >
+          {statusChoices.map((choice) => (
+            <option key={choice.value} value={choice.value}>
+              {choice.label}
+            </option>
+          ))}
+        </select>
+      </div>
+      <div className="pl-filter pl-filter-text">
+        <label htmlFor={textId}>Find a cell</label>
+        <input
+          id={textId}
+          className="pl-input"
+          type="search"
+          placeholder="e.g. 18-24 or Harrowby"
+          value={view.text}
+          onChange={(event) => onChange({ ...view, text: event.target.value })}
+        />
+      </div>
+      <p className="pl-filter-count pl-small pl-muted" aria-live="polite">
+        {shown === total ? `${total} cells` : `${shown} of ${total} cells`}
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,40 @@
+// Plain words for fieldwork values, shared by the interviewer's screens.
+import type { CellStatus, Disposition } from '../db/plumbline-db';
+
+export const dispositionWords: Record<Disposition, string> = {
+  complete: 'Complete',
+  partial: 'Partial',
+  refusal: 'Refusal',
+  non_contact: 'Non-contact',
+  other: 'Other',
+  not_eligible: 'Not eligible',
+};
+
+/** One line under each outcome on the log-contact screen. */
+export const dispositionHints: Record<Disposition, string> = {
+  complete: 'The whole interview was done',
+  partial: 'Started, not finished',
+  refusal: 'Would not take part',
+  non_contact: 'Nobody reached',
+  other: 'Anything else',
+  not_eligible: 'Not in the survey’s population',
+};
+
+export const dispositionOrder: Disposition[] = ['complete', 'partial', 'refusal', 'non_contact', 'other', 'not_eligible'];
+
+export const cellStatusWords: Record<CellStatus, string> = {
+  open: 'Open',
+  nearly_full: 'Nearly full',
+  full: 'Full',
+  closed: 'Closed',
+};
+
+export function dispositionWord(value: unknown): string {
+  return typeof value === 'string' && value in dispositionWords ? dispositionWords[value as Disposition] : 'Unknown outcome';
+}
+
+/** "age_band" → "Age band". */
+export function variableWord(name: string): string {
+  const words = name.replace(/[_-]+/g, ' ').trim();
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}

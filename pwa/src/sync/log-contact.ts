@@ -1,0 +1,20 @@
+// Logging a contact: the record gets its UUID here and is written to the outbox before
+// anything else happens; only then, if the device is online, a sync is started (its
+// outcome does not matter to the person logging: the contact is safe on the device).
+import { v4 as uuidv4 } from 'uuid';
+import { addToOutbox } from '../db/outbox-store';
+import type { InterviewRecord } from '../db/plumbline-db';
+import { requestSync } from './sync-engine';
+
+export type ContactDraft = Omit<InterviewRecord, 'id' | 'endedAt'>;
+
+export async function logContact(interviewerId: string, projectId: string, draft: ContactDraft): Promise<InterviewRecord> {
+  const record: InterviewRecord = { id: uuidv4(), ...draft, endedAt: new Date().toISOString() };
+  if (record.disposition !== 'complete') {
+    delete record.categories;
+    delete record.headlineAnswer;
+  }
+  await addToOutbox(interviewerId, projectId, record);
+  if (navigator.onLine) void requestSync();
+  return record;
+}
