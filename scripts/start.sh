@@ -12,6 +12,7 @@ export DATABASE_URL; DATABASE_URL="$(database_url "$DB_NAME")"
 export JWT_SECRET; JWT_SECRET="${JWT_SECRET:-$(jwt_secret)}"
 export HOST="${HOST:-127.0.0.1}" PORT="${PORT:-3000}"
 export PWA_DIST="$ROOT/pwa/dist"
+export LOG_LEVEL="${LOG_LEVEL:-warn}"   # LOG_LEVEL=info logs every request
 
 API_PID=
 cleanup() {
