@@ -17,7 +17,8 @@ export LOG_LEVEL="${LOG_LEVEL:-warn}"   # LOG_LEVEL=info logs every request
 API_PID=
 cleanup() {
   trap - INT TERM EXIT
-  [[ -n "$API_PID" ]] && kill "$API_PID" 2>/dev/null && wait "$API_PID" 2>/dev/null
+  set +e
+  if [[ -n "$API_PID" ]]; then kill "$API_PID" 2>/dev/null; wait "$API_PID" 2>/dev/null; fi
   if [[ "$PG_STARTED_HERE" == 1 ]]; then stop_postgres; fi
 }
 trap cleanup INT TERM EXIT

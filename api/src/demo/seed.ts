@@ -92,7 +92,7 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
     const batch: object[] = [];
     for (let day = 0; day < 16; day++) {
       if (random() < 0.2) continue;
-      const completes = 3 + Math.floor(random() * 5);
+      const completes = 5 + Math.floor(random() * 7);
       let clock = fieldStart + day * DAY + (9.5 + random() * 2) * 3_600_000;
       const contact = (disposition: string, extra: object = {}) => {
         const minutes = disposition === 'complete' ? 12 + random() * 14 : 1 + random() * 3;
