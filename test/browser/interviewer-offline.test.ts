@@ -68,12 +68,14 @@ async function answerAndSave(page: Page, answer: 'Yes' | 'No', shotPrefix?: stri
   await page.getByText('Complete saved on this device.').waitFor();
 }
 
+// Respondents whose cells the seeded demo leaves open (the demo's sample is short of young
+// men, basic education and the outlying regions), so no full-cell question interrupts.
 const RESPONDENTS: { categories: Record<string, string>; answer: 'Yes' | 'No' }[] = [
-  { categories: { 'Age band': '45-54', Sex: 'male', Region: 'Mardon', Education: 'degree' }, answer: 'Yes' },
-  { categories: { 'Age band': '25-34', Sex: 'female', Region: 'Harrowby', Education: 'secondary' }, answer: 'No' },
-  { categories: { 'Age band': '65+', Sex: 'female', Region: 'Old Quay', Education: 'basic' }, answer: 'Yes' },
-  { categories: { 'Age band': '35-44', Sex: 'male', Region: 'Tarnfield', Education: 'vocational' }, answer: 'No' },
-  { categories: { 'Age band': '55-64', Sex: 'female', Region: 'Kestle Vale', Education: 'secondary' }, answer: 'Yes' },
+  { categories: { 'Age band': '18-24', Sex: 'male', Region: 'Mardon', Education: 'basic' }, answer: 'Yes' },
+  { categories: { 'Age band': '25-34', Sex: 'female', Region: 'Old Quay', Education: 'secondary' }, answer: 'No' },
+  { categories: { 'Age band': '35-44', Sex: 'male', Region: 'Tarnfield', Education: 'vocational' }, answer: 'Yes' },
+  { categories: { 'Age band': '25-34', Sex: 'male', Region: 'Kestle Vale', Education: 'basic' }, answer: 'No' },
+  { categories: { 'Age band': '45-54', Sex: 'male', Region: 'Mardon', Education: 'secondary' }, answer: 'Yes' },
 ];
 
 describe('interviewer offline at phone size', () => {

@@ -10,6 +10,7 @@
 // Everything here works offline; nothing here is ever sent except by the sync module.
 import { Dexie, type EntityTable, type Table } from 'dexie';
 import type { Role } from '../config/roles';
+import type { CellStatus, QuotaCell, QuotaVariable } from '../lib/cells';
 
 export interface SessionUser {
   id: string;
@@ -81,29 +82,7 @@ export interface CachedProject {
   savedAt: string;
 }
 
-export type CellStatus = 'open' | 'nearly_full' | 'full' | 'closed';
-
-export interface QuotaVariable {
-  id: string;
-  name: string;
-  interlocked: boolean;
-  categories: { id: string; label: string }[];
-}
-
-/** A cell as the server counts it (GET cells, and every sync reply). */
-export interface QuotaCell {
-  id: string;
-  kind: 'interlocked' | 'margin';
-  label: string;
-  categoryIds: string[];
-  target: number;
-  achieved: number;
-  overQuota: number;
-  remaining: number;
-  fillRate: number;
-  status: CellStatus;
-  closedAt: string | null;
-}
+export type { CellStatus, QuotaCell, QuotaVariable };
 
 export interface CachedCells {
   projectId: string;

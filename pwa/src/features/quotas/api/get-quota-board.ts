@@ -3,22 +3,10 @@
 // 30 seconds while the page is open and whenever the window regains focus.
 import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import type { CellStatus, QuotaCell } from '../../../lib/cells';
 
-export type CellStatus = 'open' | 'nearly_full' | 'full' | 'closed';
-
-export interface Cell {
-  id: string;
-  kind: 'interlocked' | 'margin';
-  label: string;
-  categoryIds: string[];
-  target: number;
-  achieved: number;
-  overQuota: number;
-  remaining: number;
-  fillRate: number;
-  status: CellStatus;
-  closedAt: string | null;
-}
+export type { CellStatus };
+export type Cell = QuotaCell;
 
 export interface InterviewerProgress {
   id: string;
