@@ -125,6 +125,23 @@ describe('interviewer offline at phone size', () => {
     const balanceAfter = await api<{ n: number }>(lead.token, `/projects/${projectId}/balance`);
     expect(completesOf(boardAfter)).toBe(completesOf(boardBefore) + 5);
     expect(balanceAfter.n).toBe(balanceBefore.n + 5);
+    await browser.close();
+
+    // The supervisor sees the five on the quota board; the lead sees the balance move.
+    browser = await openBrowser(PHONE);
+    await signIn(browser.page, baseUrl, 'supervisor@vellmoor.example');
+    const row = browser.page.getByRole('table', { name: 'Interviewers' }).getByRole('row', { name: /Owen Marsh/ });
+    await row.waitFor();
+    expect(await row.getByRole('cell').nth(1).textContent()).toBe(String(completesOf(boardBefore) + 5));
+    await screenshot(browser.page, 'interviewer-5b-supervisor-board');
+    await browser.close();
+    browser = await openBrowser(PHONE);
+    await signIn(browser.page, baseUrl, 'lead@vellmoor.example');
+    await browser.page.waitForURL(`${baseUrl}/lead`);
+    await browser.page.getByRole('link', { name: 'Balance', exact: true }).click();
+    const counted = `${(balanceBefore.n + 5).toLocaleString('en-GB')} of 1,200 completes counted`;
+    await browser.page.getByText(counted).waitFor();
+    await screenshot(browser.page, 'interviewer-5c-lead-balance');
   });
 
   it('warns before an interview in a closed cell, and the office sees it over quota', async () => {
