@@ -73,7 +73,7 @@ async function answerAndSave(page: Page, answer: 'Yes' | 'No', shotPrefix?: stri
 const RESPONDENTS: { categories: Record<string, string>; answer: 'Yes' | 'No' }[] = [
   { categories: { 'Age band': '18-24', Sex: 'male', Region: 'Mardon', Education: 'basic' }, answer: 'Yes' },
   { categories: { 'Age band': '25-34', Sex: 'female', Region: 'Old Quay', Education: 'secondary' }, answer: 'No' },
-  { categories: { 'Age band': '35-44', Sex: 'male', Region: 'Tarnfield', Education: 'vocational' }, answer: 'Yes' },
+  { categories: { 'Age band': '35-44', Sex: 'male', Region: 'Tarnholm', Education: 'vocational' }, answer: 'Yes' },
   { categories: { 'Age band': '25-34', Sex: 'male', Region: 'Kestle Vale', Education: 'basic' }, answer: 'No' },
   { categories: { 'Age band': '45-54', Sex: 'male', Region: 'Mardon', Education: 'secondary' }, answer: 'Yes' },
 ];

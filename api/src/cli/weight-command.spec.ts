@@ -79,7 +79,7 @@ describe('plumbline weight', () => {
   });
 
   it('rejects a target category with no respondents, naming the targets line', () => {
-    expectRejected(weigh(DATA, `${TARGETS}region,Tarnfield,0.2\n`), 'targets.csv', 'line 6', 'region', '"Tarnfield"', 'no respondents');
+    expectRejected(weigh(DATA, `${TARGETS}region,Tarnholm,0.2\n`), 'targets.csv', 'line 6', 'region', '"Tarnholm"', 'no respondents');
   });
 
   it('rejects a variable missing from the data', () => {

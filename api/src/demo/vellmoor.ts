@@ -7,7 +7,7 @@
 export const VELLMOOR_TARGETS: Record<string, Record<string, number>> = {
   age_band: { '18-24': 11, '25-34': 17, '35-44': 16, '45-54': 17, '55-64': 16, '65+': 23 },
   sex: { female: 51, male: 49 },
-  region: { Harrowby: 28, 'Kestle Vale': 19, Mardon: 22, 'Old Quay': 17, Tarnfield: 14 },
+  region: { Harrowby: 28, 'Kestle Vale': 19, Mardon: 22, 'Old Quay': 17, Tarnholm: 14 },
   education: { basic: 18, secondary: 37, vocational: 21, degree: 24 },
 };
 
@@ -15,7 +15,7 @@ export const VELLMOOR_TARGETS: Record<string, Record<string, number>> = {
 export const VELLMOOR_LEAN: Record<string, Record<string, number>> = {
   age_band: { '18-24': 0.6, '25-34': 0.8, '35-44': 1, '45-54': 1.1, '55-64': 1.3, '65+': 1.2 },
   sex: { female: 1.15, male: 0.85 },
-  region: { Harrowby: 1.3, 'Kestle Vale': 0.8, Mardon: 1, 'Old Quay': 0.9, Tarnfield: 0.7 },
+  region: { Harrowby: 1.3, 'Kestle Vale': 0.8, Mardon: 1, 'Old Quay': 0.9, Tarnholm: 0.7 },
   education: { basic: 0.6, secondary: 0.9, vocational: 1, degree: 1.5 },
 };
 
@@ -56,7 +56,7 @@ export function drawRespondent(random: () => number): Respondent {
   }
   // Support for the extension: higher among the young, in Harrowby and among graduates.
   const young = categories.age_band === '18-24' || categories.age_band === '25-34' ? 0.12 : 0;
-  const town = categories.region === 'Harrowby' ? 0.1 : categories.region === 'Tarnfield' ? -0.1 : 0;
+  const town = categories.region === 'Harrowby' ? 0.1 : categories.region === 'Tarnholm' ? -0.1 : 0;
   const degree = categories.education === 'degree' ? 0.08 : 0;
   return { categories, supports: random() < 0.42 + young + town + degree };
 }

@@ -44,7 +44,7 @@ const noWeights = {
   effectiveSampleSize: null,
   margins: margins.map((m) => ({ ...m, weighted: null })),
   outcome: { column: 'headline', unweighted: 0.45 },
-  weightingProblem: 'No completed interviews yet in region: Tarnfield; weights can be computed once every category has at least one.',
+  weightingProblem: 'No completed interviews yet in region: Tarnholm; weights can be computed once every category has at least one.',
 };
 
 function figure(group: string, term: string): string | null {
@@ -105,7 +105,7 @@ describe("lead's balance page", () => {
     renderApp('/lead/balance');
 
     const note = await screen.findByRole('note', { name: 'Weights not yet possible' });
-    expect(note).toHaveTextContent('No completed interviews yet in region: Tarnfield; weights can be computed once every category has at least one.');
+    expect(note).toHaveTextContent('No completed interviews yet in region: Tarnholm; weights can be computed once every category has at least one.');
     expect(figure('Weighting figures', 'Design effect')).toBe('—');
     expect(figure('Headline figures', 'Yes, unweighted')).toBe('45.0%');
     expect(figure('Headline figures', 'Yes, weighted')).toBe('—');
