@@ -1,4 +1,4 @@
-import type { ReactElement } from 'react';
+import { lazy, type ReactElement } from 'react';
 import {
   checkmarkDoneOutline,
   cloudUploadOutline,
@@ -22,12 +22,16 @@ import { ReviewQueuePage } from '../features/review/pages/review-queue-page';
 import { InterviewersPage } from '../features/team/pages/interviewers-page';
 import { ProjectsPage } from '../features/projects/pages/projects-page';
 import { NewProjectPage } from '../features/projects/pages/new-project-page';
-import { ProjectPage } from '../features/projects/pages/project-page';
-import { BalancePage } from '../features/balance/pages/balance-page';
 import { BenchmarksPage } from '../features/benchmarks/pages/benchmarks-page';
 import { DeliveryPage } from '../features/delivery/pages/delivery-page';
-import { ProgressPage } from '../features/balance/pages/progress-page';
 import { PeoplePage } from '../features/people/pages/people-page';
+
+// The heavier office pages (charts, the targets editor) load on first use, which keeps the
+// bundle every interviewer's phone downloads small. The service worker still stores them
+// for offline use.
+const ProjectPage = lazy(() => import('../features/projects/pages/project-page').then((m) => ({ default: m.ProjectPage })));
+const BalancePage = lazy(() => import('../features/balance/pages/balance-page').then((m) => ({ default: m.BalancePage })));
+const ProgressPage = lazy(() => import('../features/balance/pages/progress-page').then((m) => ({ default: m.ProgressPage })));
 
 export interface NavItem {
   path: string;

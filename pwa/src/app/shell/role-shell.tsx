@@ -1,13 +1,20 @@
 import { IonRouterOutlet } from '@ionic/react';
+import { Suspense, type ReactElement } from 'react';
 import { Navigate, Route } from 'react-router-dom';
 import { HeaderSlotProvider } from '../../components/header-slot';
 import { PlumblineLogo } from '../../components/plumbline-logo';
+import { LoadingPanel } from '../../components/state-panels';
 import type { SessionUser } from '../../db/plumbline-db';
 import { useWideScreen } from '../../hooks/use-wide-screen';
 import { AccountButton } from '../../features/auth/components/account-button';
 import { AccountSummary } from '../../features/auth/components/account-summary';
 import { homePathFor, roleNavigation } from '../role-navigation';
 import { NavLinks } from './nav-links';
+
+/** Pages that load on first use show a loading panel meanwhile. */
+function loading(element: ReactElement): ReactElement {
+  return <Suspense fallback={<LoadingPanel what="this page" />}>{element}</Suspense>;
+}
 
 /**
  * The signed-in frame. Only the person's own role's routes exist here, so any other path
@@ -33,10 +40,10 @@ export function RoleShell({ user }: { user: SessionUser }) {
           <div className="pl-shell-outlet">
             <IonRouterOutlet>
               {items.map((item) => (
-                <Route key={item.path} path={item.path} element={item.element} />
+                <Route key={item.path} path={item.path} element={loading(item.element)} />
               ))}
               {items.flatMap((item) =>
-                (item.subPages ?? []).map((sub) => <Route key={sub.path} path={sub.path} element={sub.element} />),
+                (item.subPages ?? []).map((sub) => <Route key={sub.path} path={sub.path} element={loading(sub.element)} />),
               )}
               <Route path="*" element={<Navigate to={homePathFor(user.role)} replace />} />
             </IonRouterOutlet>
