@@ -8,9 +8,9 @@ export async function countUnsent(): Promise<number> {
   return db.outbox.count();
 }
 
-/** `undefined` while the device storage is being read. */
-export function useUnsentCount(): number | undefined {
-  return useLiveQuery(() => db.outbox.count(), []);
+/** This interviewer's entries still waiting to be sent; `undefined` while the device storage is being read. */
+export function useUnsentCount(interviewerId: string): number | undefined {
+  return useLiveQuery(async () => (await listWaiting(interviewerId)).length, [interviewerId]);
 }
 
 export function isRejected(entry: OutboxEntry): boolean {

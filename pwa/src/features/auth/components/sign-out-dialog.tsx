@@ -13,7 +13,7 @@ function interviews(count: number): string {
 }
 
 export function SignOutDialog({ user, onClose }: SignOutDialogProps) {
-  const unsent = useUnsentCount();
+  const unsent = useUnsentCount(user.id);
   const signOut = useSignOut();
 
   return (

@@ -7,11 +7,11 @@ import { countUnsent } from '../../../db/outbox-store';
 import { installFakeApi } from '../../../test/fake-api';
 import { renderApp, signedInAs } from '../../../test/render-app';
 
-async function addUnsentInterviews(count: number) {
-  for (let i = 0; i < count; i += 1) {
+async function addUnsentInterviews(count: number, interviewerId = 'user-interviewer', first = 0) {
+  for (let i = first; i < first + count; i += 1) {
     await db.outbox.add({
       clientId: `7d1f0c1e-0000-4000-8000-00000000000${i}`,
-      interviewerId: 'user-interviewer',
+      interviewerId,
       projectId: 'project-vellmoor',
       createdAt: new Date(2026, 2, 2, 10, i).toISOString(),
       payload: { cell: 'age 18-34 × female', outcome: 'complete' },
@@ -65,6 +65,25 @@ describe('signing out', () => {
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();
     expect(await countUnsent()).toBe(1);
+  });
+
+  it('counts only the signed-in interviewer’s own waiting interviews, and keeps everyone’s', async () => {
+    installFakeApi();
+    vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(false);
+    await signedInAs('interviewer');
+    await addUnsentInterviews(2);
+    await addUnsentInterviews(3, 'user-someone-else', 2);
+    renderApp('/interviewer');
+    const user = userEvent.setup();
+
+    await user.click(await screen.findByRole('button', { name: 'Account: Ines Marr' }));
+    await user.click(within(await screen.findByRole('dialog', { name: 'Account' })).getByRole('button', { name: 'Sign out' }));
+    const confirm = await screen.findByRole('dialog', { name: 'Sign out of Plumbline?' });
+    expect(confirm).toHaveTextContent('2 unsent interviews will stay on this device.');
+    await user.click(within(confirm).getByRole('button', { name: 'Sign out' }));
+
+    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();
+    expect(await countUnsent()).toBe(5);
   });
 
   it('can be called off, leaving the person signed in', async () => {
