@@ -6,12 +6,14 @@ import * as m0001 from './20261202000100_organisations_and_users.js';
 import * as m0002 from './20261202000200_projects.js';
 import * as m0003 from './20261202000300_sign_in_throttle.js';
 import * as m0004 from './20261202000400_quotas_and_interviews.js';
+import * as m0005 from './20261202000500_project_time_zone.js';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000100_organisations_and_users': m0001,
   '20261202000200_projects': m0002,
   '20261202000300_sign_in_throttle': m0003,
   '20261202000400_quotas_and_interviews': m0004,
+  '20261202000500_project_time_zone': m0005,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -157,3 +157,27 @@ describe('quota board', () => {
     expect((await (await client(h, org, 'client')).get(`/api/projects/${org.projectId}/quota-board`)).status).toBe(403);
   });
 });
+
+describe('field days', () => {
+  it('counts a contact on the calendar day of the project’s time zone, and re-dates them when the zone changes', async () => {
+    const lead = await client(h, org, 'lead');
+    // 23:30 on 20 November in London is already 21 November in Auckland (UTC+13 in summer there).
+    const late = { ...complete(someone()), startedAt: '2026-11-20T23:10:00.000Z', endedAt: '2026-11-20T23:30:00.000Z' };
+    expect((await lead.patch(`/api/projects/${org.projectId}`, { timeZone: 'Europe/London' })).body.timeZone).toBe('Europe/London');
+    expect((await interviewer.post(syncPath, { interviews: [late] })).body.accepted).toBe(1);
+    const dayOf = async () => (await h.db('interviews').where({ id: late.id }).first('field_day'))!.field_day;
+    expect(await dayOf()).toBe('2026-11-20');
+    await lead.patch(`/api/projects/${org.projectId}`, { timeZone: 'Pacific/Auckland' });
+    expect(await dayOf()).toBe('2026-11-21');
+    const exported = (await lead.get(`/api/projects/${org.projectId}/interviews/export.csv`)).text;
+    expect(exported.split('\n').find((line: string) => line.startsWith(late.id))).toContain(',2026-11-21,');
+  });
+
+  it('refuses a time zone that does not exist, changing nothing', async () => {
+    const lead = await client(h, org, 'lead');
+    const res = await lead.patch(`/api/projects/${org.projectId}`, { timeZone: 'Vellmoor/Central' });
+    expect(res.status).toBe(400);
+    expect(res.body.message).toBe('timeZone must be a time zone name such as Europe/London');
+    expect((await lead.get(`/api/projects/${org.projectId}`)).body.timeZone).toBe('Pacific/Auckland');
+  });
+});

@@ -41,6 +41,8 @@ export interface ProjectRow {
   target_size: number;
   status: 'setup' | 'fieldwork' | 'closed';
   headline_question: string;
+  /** IANA time zone of the fieldwork: field days and "today" are counted in it. */
+  time_zone: string;
   targets_updated_at: Date | null;
   created_at: Date;
 }

@@ -60,6 +60,7 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
         field_start: isoDay(fieldStart),
         field_end: isoDay(today + 4 * DAY),
         target_size: 1200,
+        time_zone: 'Europe/London',
         status: 'fieldwork',
       })
       .returning('*');

@@ -27,6 +27,12 @@ export interface SyncReply {
   cells: CellView[];
 }
 
+/** The calendar day (YYYY-MM-DD) of a moment in the project's time zone. */
+export function fieldDayIn(timeZone: string): (moment: string) => string {
+  const format = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
+  return (moment) => format.format(new Date(moment));
+}
+
 type Checked = { ok: true; item: InterviewItemDto } | { ok: false; id: string | null; reason: string };
 
 function checkShape(raw: unknown): Checked {
@@ -71,7 +77,8 @@ export class SyncService {
   ) {}
 
   async sync(user: AuthUser, projectId: string, batch: unknown[]): Promise<SyncReply> {
-    await this.access.findForInterviewer(user, projectId);
+    const project = await this.access.findForInterviewer(user, projectId);
+    const fieldDay = fieldDayIn(project.time_zone);
     const checked = batch.map(checkShape);
 
     const results = await this.db.transaction(async (trx) => {
@@ -116,7 +123,7 @@ export class SyncService {
           headline_answer: item.disposition === 'complete' ? (item.headlineAnswer as boolean) : null,
           started_at: new Date(item.startedAt),
           ended_at: new Date(item.endedAt),
-          field_day: item.endedAt.slice(0, 10),
+          field_day: fieldDay(item.endedAt),
           over_quota: overQuota,
         });
         return { id: item.id, status: 'accepted', overQuota };

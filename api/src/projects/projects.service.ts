@@ -17,6 +17,7 @@ export interface ProjectSummary {
   targetSize: number;
   status: ProjectRow['status'];
   headlineQuestion: string;
+  timeZone: string;
 }
 
 export interface ProjectMember {
@@ -36,6 +37,7 @@ export function projectSummary(row: ProjectRow): ProjectSummary {
     targetSize: row.target_size,
     status: row.status,
     headlineQuestion: row.headline_question,
+    timeZone: row.time_zone,
   };
 }
 
@@ -76,13 +78,14 @@ export class ProjectsService {
         field_end: dto.fieldEnd,
         target_size: dto.targetSize,
         headline_question: dto.headlineQuestion.trim(),
+        time_zone: dto.timeZone ?? 'UTC',
         status: 'setup',
       })
       .returning('*');
     return projectSummary(row as ProjectRow);
   }
 
-  /** A new target size recomputes the cell targets. */
+  /** A new target size recomputes the cell targets; a new time zone re-dates the field days. */
   async update(user: AuthUser, id: string, dto: UpdateProjectDto): Promise<ProjectSummary> {
     const current = await this.access.find(user, id);
     checkDates(dto.fieldStart ?? current.field_start, dto.fieldEnd ?? current.field_end);
@@ -94,11 +97,18 @@ export class ProjectsService {
     if (dto.targetSize !== undefined) changes.target_size = dto.targetSize;
     if (dto.headlineQuestion !== undefined) changes.headline_question = dto.headlineQuestion.trim();
     if (dto.status !== undefined) changes.status = dto.status;
+    if (dto.timeZone !== undefined) changes.time_zone = dto.timeZone;
     if (Object.keys(changes).length === 0) return projectSummary(current);
     const row = await this.db.transaction(async (trx) => {
       const [updated] = await trx('projects').where({ id }).update(changes).returning('*');
       if (changes.target_size !== undefined && changes.target_size !== current.target_size) {
         await this.cells.recompute(id, trx);
+      }
+      if (changes.time_zone !== undefined && changes.time_zone !== current.time_zone) {
+        // Field days already recorded move to the new zone's calendar.
+        await trx('interviews')
+          .where({ project_id: id })
+          .update({ field_day: trx.raw('(ended_at AT TIME ZONE ?)::date', [changes.time_zone]) });
       }
       return updated as ProjectRow;
     });

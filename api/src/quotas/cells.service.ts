@@ -85,10 +85,11 @@ export class CellsService {
     };
   }
 
-  async interviewerProgress(projectId: string): Promise<InterviewerProgress[]> {
+  /** Completes per interviewer; "today" is today in the project's time zone. */
+  async interviewerProgress(projectId: string, timeZone: string): Promise<InterviewerProgress[]> {
     const { rows } = await this.db.raw<{ rows: InterviewerProgress[] }>(
       `SELECT u.id, u.name,
-              count(i.id) FILTER (WHERE ${counted('i')} AND i.field_day = current_date)::int AS "completesToday",
+              count(i.id) FILTER (WHERE ${counted('i')} AND i.field_day = (now() AT TIME ZONE ?)::date)::int AS "completesToday",
               count(i.id) FILTER (WHERE ${counted('i')})::int AS "completesTotal",
               count(i.id)::int AS "contactsTotal",
               count(i.id) FILTER (WHERE i.over_quota)::int AS "overQuota"
@@ -97,7 +98,7 @@ export class CellsService {
         WHERE u.id IN (SELECT user_id FROM project_members WHERE project_id = ?) AND u.role = 'interviewer'
            OR u.id IN (SELECT interviewer_id FROM interviews WHERE project_id = ?)
         GROUP BY u.id ORDER BY u.name`,
-      [projectId, projectId, projectId],
+      [timeZone, projectId, projectId, projectId],
     );
     return rows;
   }

@@ -62,7 +62,7 @@ export class QuotasController {
     const project = await this.access.find(user, projectId);
     const [cells, interviewers] = await Promise.all([
       this.cells.cellCounts(projectId),
-      this.cells.interviewerProgress(projectId),
+      this.cells.interviewerProgress(projectId, project.time_zone),
     ]);
     return { projectId, targetSize: project.target_size, cells, interviewers, refreshedAt: new Date().toISOString() };
   }

@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsInt, IsISO8601, IsOptional, IsString, Max, MaxLength, Min, MinLength } from 'class-validator';
+import { IsInt, IsISO8601, IsOptional, IsString, IsTimeZone, Max, MaxLength, Min, MinLength } from 'class-validator';
 
 export class CreateProjectDto {
   @ApiProperty({ example: 'Vellmoor tram extension' })
@@ -33,4 +33,9 @@ export class CreateProjectDto {
   @MinLength(1, { message: 'headlineQuestion must not be empty' })
   @MaxLength(500)
   headlineQuestion: string;
+
+  @ApiPropertyOptional({ example: 'Europe/London', description: 'IANA time zone of the fieldwork; field days are counted in it. Default UTC.' })
+  @IsOptional()
+  @IsTimeZone({ message: 'timeZone must be a time zone name such as Europe/London' })
+  timeZone?: string;
 }

@@ -22,13 +22,13 @@ export function rememberProject(id: string): void {
   }
 }
 
-/** The remembered project when it is still in the list, otherwise the first one. */
+/** The remembered project when it is still in the list, otherwise the first one in the field, otherwise the first. */
 export function useChosenProject(projects: Project[]): [Project | undefined, (id: string) => void] {
   const [chosenId, setChosenId] = useState<string | null>(readChoice);
   const choose = useCallback((id: string) => {
     setChosenId(id);
     rememberProject(id);
   }, []);
-  const chosen = projects.find((p) => p.id === chosenId) ?? projects[0];
+  const chosen = projects.find((p) => p.id === chosenId) ?? projects.find((p) => p.status === 'fieldwork') ?? projects[0];
   return [chosen, choose];
 }

@@ -12,6 +12,7 @@ export interface Project {
   targetSize: number;
   status: 'setup' | 'fieldwork' | 'closed' | string;
   headlineQuestion?: string;
+  timeZone?: string;
 }
 
 export const projectKeys = {

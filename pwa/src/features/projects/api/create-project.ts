@@ -11,6 +11,8 @@ export interface NewProject {
   fieldEnd: string;
   targetSize: number;
   headlineQuestion: string;
+  /** IANA time zone in which field days are counted. */
+  timeZone: string;
 }
 
 export function createProject(project: NewProject): Promise<Project> {

@@ -7,9 +7,23 @@ export interface ProjectDraft {
   fieldEnd: string;
   targetSize: string;
   headlineQuestion: string;
+  timeZone: string;
 }
 
-export const emptyDraft: ProjectDraft = { name: '', topic: '', fieldStart: '', fieldEnd: '', targetSize: '', headlineQuestion: '' };
+/** The zone this device runs in: the usual starting point for a team that works nearby. */
+export function deviceTimeZone(): string {
+  return Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
+}
+
+export const emptyDraft: ProjectDraft = {
+  name: '',
+  topic: '',
+  fieldStart: '',
+  fieldEnd: '',
+  targetSize: '',
+  headlineQuestion: '',
+  timeZone: 'UTC',
+};
 
 export type DraftProblems = Partial<Record<keyof ProjectDraft, string>>;
 
@@ -34,6 +48,7 @@ export function checkDraft(draft: ProjectDraft): { project?: NewProject; problem
       fieldEnd: draft.fieldEnd,
       targetSize: size,
       headlineQuestion: draft.headlineQuestion.trim(),
+      timeZone: draft.timeZone,
     },
   };
 }

@@ -4,14 +4,20 @@ import { Link, useNavigate } from 'react-router-dom';
 import { PageFrame } from '../../../components/page-frame';
 import { isApiError } from '../../../lib/api-error';
 import { useCreateProject } from '../api/create-project';
-import { checkDraft, emptyDraft, type DraftProblems, type ProjectDraft } from '../components/project-form-checks';
+import { checkDraft, deviceTimeZone, emptyDraft, type DraftProblems, type ProjectDraft } from '../components/project-form-checks';
 import { TextField } from '../components/text-field';
+
+/** Every zone the browser knows, with the chosen one first if it is missing from the list. */
+function timeZones(chosen: string): string[] {
+  const known = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
+  return known.includes(chosen) ? known : [chosen, ...known];
+}
 
 /** The lead starts a project: its facts first; targets and team come on the project page. */
 export function NewProjectPage() {
   const navigate = useNavigate();
   const create = useCreateProject();
-  const [draft, setDraft] = useState<ProjectDraft>(emptyDraft);
+  const [draft, setDraft] = useState<ProjectDraft>(() => ({ ...emptyDraft, timeZone: deviceTimeZone() }));
   const [problems, setProblems] = useState<DraftProblems>({});
   const set = (field: keyof ProjectDraft) => (event: { target: { value: string } }) => setDraft({ ...draft, [field]: event.target.value });
 
@@ -54,6 +60,19 @@ export function NewProjectPage() {
           problem={problems.headlineQuestion ?? serverProblem('headlineQuestion')}
           hint="The yes/no question whose share the project reports."
         />
+        <div className="pl-field">
+          <label htmlFor="pl-time-zone">Time zone</label>
+          <select id="pl-time-zone" value={draft.timeZone} onChange={set('timeZone')} aria-describedby="pl-time-zone-note">
+            {timeZones(draft.timeZone).map((zone) => (
+              <option key={zone} value={zone}>
+                {zone.replaceAll('_', ' ')}
+              </option>
+            ))}
+          </select>
+          <span id="pl-time-zone-note" className={serverProblem('timeZone') ? 'pl-field-problem' : 'pl-small pl-muted'}>
+            {serverProblem('timeZone') ?? 'Where the fieldwork happens: field days and “today” on the quota board follow this zone.'}
+          </span>
+        </div>
         {create.error ? (
           <p className="pl-form-problem" role="alert">
             {create.error.message}

@@ -167,6 +167,7 @@ describe('a new project', () => {
     await user.type(screen.getByLabelText('Field end'), '2027-01-31');
     await user.type(screen.getByLabelText('Target sample size'), '400');
     await user.type(screen.getByLabelText('Headline question'), 'Would you use an hourly evening bus?');
+    await user.selectOptions(screen.getByLabelText('Time zone'), 'Europe/London');
     await user.click(screen.getByRole('button', { name: 'Create project' }));
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Kestle Vale bus survey' })).toBeInTheDocument();
@@ -177,6 +178,7 @@ describe('a new project', () => {
       fieldEnd: '2027-01-31',
       targetSize: 400,
       headlineQuestion: 'Would you use an hourly evening bus?',
+      timeZone: 'Europe/London',
     });
   });
 });

@@ -37,6 +37,12 @@ export function ProjectPage() {
                   <span className="pl-figure">{formatCount(p.targetSize)}</span> interviews
                 </dd>
               </div>
+              {p.timeZone ? (
+                <div>
+                  <dt>Time zone</dt>
+                  <dd>{p.timeZone.replaceAll('_', ' ')}</dd>
+                </div>
+              ) : null}
               {p.headlineQuestion ? (
                 <div>
                   <dt>Headline question</dt>

@@ -152,4 +152,17 @@ describe('several projects', () => {
     expect(await screen.findByText('sex: female')).toBeInTheDocument();
     expect(screen.getByLabelText('Project')).toHaveValue('p2');
   });
+
+  it('opens on a project in the field rather than a newer one still being set up', async () => {
+    const api = installFakeApi();
+    const newer = { ...project, id: 'p3', name: 'Old Quay ferry (being set up)', status: 'setup' };
+    api.on('GET', '/api/projects', () => json([newer, project]));
+    api.on('GET', '/api/projects/p1/quota-board', () => json(board()));
+    api.on('GET', '/api/projects/p3/quota-board', () => json({ ...board([]), projectId: 'p3' }));
+    await signedInAs('supervisor');
+    renderApp('/supervisor');
+
+    expect(await screen.findByText('region: Harrowby')).toBeInTheDocument();
+    expect(screen.getByLabelText('Project')).toHaveValue('p1');
+  });
 });
