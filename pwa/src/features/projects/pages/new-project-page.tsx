@@ -62,7 +62,7 @@ export function NewProjectPage() {
         />
         <div className="pl-field">
           <label htmlFor="pl-time-zone">Time zone</label>
-          <select id="pl-time-zone" value={draft.timeZone} onChange={set('timeZone')} aria-describedby="pl-time-zone-note">
+          <select id="pl-time-zone" className="pl-select" value={draft.timeZone} onChange={set('timeZone')} aria-describedby="pl-time-zone-note">
             {timeZones(draft.timeZone).map((zone) => (
               <option key={zone} value={zone}>
                 {zone.replaceAll('_', ' ')}
