@@ -19,6 +19,24 @@ export async function loadActiveTargets(db: Knex, projectId: string): Promise<Ac
   };
 }
 
+/** The active variables and categories as the API shows them (targets and cells alike). */
+export interface VariableView {
+  id: string;
+  name: string;
+  interlocked: boolean;
+  categories: { id: string; label: string; share: number }[];
+}
+
+export async function loadVariableViews(db: Knex, projectId: string): Promise<VariableView[]> {
+  const { variables } = await loadActiveTargets(db, projectId);
+  return variables.map((v) => ({
+    id: v.id,
+    name: v.name,
+    interlocked: v.interlocked,
+    categories: v.categories.map((c) => ({ id: c.id, label: c.label, share: c.share })),
+  }));
+}
+
 @Injectable()
 export class CellAllocator {
   constructor(@Inject(KNEX) private readonly db: Knex) {}

@@ -4,7 +4,7 @@ import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
-import { loadActiveTargets } from './cell-allocator.js';
+import { loadVariableViews, type VariableView } from './cell-allocator.js';
 import { cellStatus, type CellStatus } from './cell-status.js';
 
 export interface CellView {
@@ -22,7 +22,7 @@ export interface CellView {
 }
 
 export interface CellsView {
-  variables: { id: string; name: string; interlocked: boolean; categories: { id: string; label: string }[] }[];
+  variables: VariableView[];
   cells: CellView[];
   refreshedAt: string;
 }
@@ -72,14 +72,8 @@ export class CellsService {
   }
 
   async cells(projectId: string): Promise<CellsView> {
-    const { variables } = await loadActiveTargets(this.db, projectId);
     return {
-      variables: variables.map((v) => ({
-        id: v.id,
-        name: v.name,
-        interlocked: v.interlocked,
-        categories: v.categories.map((c) => ({ id: c.id, label: c.label })),
-      })),
+      variables: await loadVariableViews(this.db, projectId),
       cells: await this.cellCounts(projectId),
       refreshedAt: new Date().toISOString(),
     };

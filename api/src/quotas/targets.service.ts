@@ -5,11 +5,11 @@ import { BadRequestException, Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
 import { parseTargetsCsv, TargetsFormatError } from '../formats/targets-csv.js';
-import { CellAllocator, loadActiveTargets } from './cell-allocator.js';
+import { CellAllocator, loadVariableViews, type VariableView } from './cell-allocator.js';
 import type { SaveTargetsDto } from './dto/targets.dto.js';
 
 export interface TargetsView {
-  variables: { id: string; name: string; interlocked: boolean; categories: { id: string; label: string; share: number }[] }[];
+  variables: VariableView[];
 }
 
 /** The most cells an interlocked cross may have: more cannot be filled by a field team. */
@@ -51,15 +51,7 @@ export class TargetsService {
   ) {}
 
   async get(projectId: string): Promise<TargetsView> {
-    const { variables } = await loadActiveTargets(this.db, projectId);
-    return {
-      variables: variables.map((v) => ({
-        id: v.id,
-        name: v.name,
-        interlocked: v.interlocked,
-        categories: v.categories.map((c) => ({ id: c.id, label: c.label, share: c.share })),
-      })),
-    };
+    return { variables: await loadVariableViews(this.db, projectId) };
   }
 
   async save(projectId: string, dto: SaveTargetsDto): Promise<TargetsView> {

@@ -11,6 +11,7 @@
 import { Dexie, type EntityTable, type Table } from 'dexie';
 import type { Role } from '../config/roles';
 import type { CellStatus, QuotaCell, QuotaVariable } from '../lib/cells';
+import type { Project } from '../lib/projects/get-projects';
 
 export interface SessionUser {
   id: string;
@@ -61,17 +62,8 @@ export interface MetaEntry {
   value: unknown;
 }
 
-/** A project as GET /api/projects lists it. */
-export interface FieldProject {
-  id: string;
-  name: string;
-  topic: string;
-  fieldStart: string | null;
-  fieldEnd: string | null;
-  targetSize: number;
-  status: string;
-  headlineQuestion: string;
-}
+/** A project as GET /api/projects lists it, kept on the device for offline use. */
+export type FieldProject = Project & { headlineQuestion: string };
 
 export interface CachedProject {
   userId: string;
