@@ -30,7 +30,8 @@ node api/dist/demo/seed.js || die "seeding the demo data failed"
 node api/dist/main.js &
 API_PID=$!
 for _ in $(seq 1 100); do
-  if curl -fsS "http://$HOST:$PORT/api/health" >/dev/null 2>&1; then break; fi
+  if node -e 'fetch(process.argv[1]).then((r) => process.exit(r.ok ? 0 : 1), () => process.exit(1))' \
+    "http://$HOST:$PORT/api/health"; then break; fi
   kill -0 "$API_PID" 2>/dev/null || die "the API stopped during start-up (see the lines above)"
   sleep 0.2
 done
