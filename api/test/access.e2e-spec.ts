@@ -91,3 +91,23 @@ describe('organisation scope', () => {
     expect(res.body.message).toMatch(/uuid/i);
   });
 });
+
+describe('organisation scope of the fieldwork routes', () => {
+  it('answers 404 on every project route for another organisation’s project, and changes nothing', async () => {
+    const rivalLead = await as(south, 'lead');
+    const rivalSupervisor = await as(south, 'supervisor');
+    const rivalInterviewer = await as(south, 'interviewer');
+    const base = `/api/projects/${north.projectId}`;
+    const reads = ['', '/members', '/targets', '/cells', '/balance', '/interviews/export.csv'];
+    for (const path of reads) expect((await rivalLead.get(`${base}${path}`)).status, path).toBe(404);
+    expect((await rivalSupervisor.get(`${base}/quota-board`)).status).toBe(404);
+    const before = await h.db('projects').where({ id: north.projectId }).first();
+    const put = await h.http().put(`${base}/targets`).set('Authorization', `Bearer ${(await signIn(h, south.users.lead.email)).accessToken}`)
+      .send({ variables: [{ name: 'sex', categories: [{ label: 'female', share: 1 }, { label: 'male', share: 1 }] }] });
+    expect(put.status).toBe(404);
+    expect((await rivalLead.post(`${base}/interviews/sync`, { interviews: [] })).status).toBe(403);
+    expect((await rivalInterviewer.post(`${base}/interviews/sync`, { interviews: [] })).status).toBe(404);
+    expect(await h.db('quota_variables').where({ project_id: north.projectId })).toHaveLength(0);
+    expect(await h.db('projects').where({ id: north.projectId }).first()).toEqual(before);
+  });
+});
