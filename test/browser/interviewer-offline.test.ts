@@ -148,7 +148,7 @@ describe('interviewer offline at phone size', () => {
     const supervisor = await tokenFor('supervisor@vellmoor.example');
     const projectId = await vellmoorId(supervisor.token);
     const board = await api<Board>(supervisor.token, `/projects/${projectId}/quota-board`);
-    const cell = board.cells.find((c) => c.label === 'age_band: 18-24 × sex: female')!;
+    const cell = board.cells.find((c) => c.label === 'age band: 18-24 × sex: female')!;
     await api(supervisor.token, `/projects/${projectId}/cells/${cell.id}/close`, 'POST');
     try {
       browser = await openBrowser(PHONE);

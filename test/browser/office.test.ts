@@ -32,7 +32,7 @@ function figure(page: Page, group: string, term: string) {
   return page.locator(`dl[aria-label="${group}"] > div`, { has: page.locator('dt', { hasText: term }) }).locator('dd');
 }
 
-const cellLabel = 'age_band: 18-24 × sex: female';
+const cellLabel = 'age band: 18-24 × sex: female';
 
 describe("supervisor's quota board", () => {
   it('shows the seeded cells on a phone and closes and reopens a cell after confirmation', async () => {

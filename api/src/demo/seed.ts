@@ -34,6 +34,9 @@ export const DEMO_USERS: { email: string; name: string; role: Role }[] = [
   { email: 'g.tallis@vellmoor.example', name: 'Greer Tallis', role: 'interviewer' },
 ];
 
+/** The scenario's column-style names as a lead would type them in the project ("age band"). */
+const shownAs = (name: string) => name.replace(/_/g, ' ');
+
 const DAY = 86_400_000;
 const isoDay = (t: number) => new Date(t).toISOString().slice(0, 10);
 
@@ -73,14 +76,14 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
   const cells = new CellsService(db);
   await new TargetsService(db, new CellAllocator(db)).save(project.id, {
     variables: Object.entries(VELLMOOR_TARGETS).map(([name, shares]) => ({
-      name,
+      name: shownAs(name),
       interlocked: name === 'age_band' || name === 'sex',
       categories: Object.entries(shares).map(([label, share]) => ({ label, share })),
     })),
   });
   const { variables } = await cells.cells(project.id);
   const idOf = (variable: string, label: string) => {
-    const v = variables.find((x) => x.name === variable)!;
+    const v = variables.find((x) => x.name === shownAs(variable))!;
     return [v.id, v.categories.find((c) => c.label === label)!.id] as const;
   };
 
