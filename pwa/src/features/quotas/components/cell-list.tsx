@@ -1,6 +1,7 @@
 import { formatCount, formatPercent } from '../../../lib/format';
 import type { Cell } from '../api/get-quota-board';
 import { CellStatusTag } from './cell-status-tag';
+import { CellToggleButton } from './cell-toggle-button';
 import { FillBar } from './fill-bar';
 
 interface CellListProps {
@@ -30,16 +31,7 @@ export function CellList({ cells, onToggle }: CellListProps) {
               {formatCount(cell.remaining)} to go
               {cell.overQuota > 0 ? <span className="pl-over"> · {formatCount(cell.overQuota)} over quota</span> : null}
             </span>
-            {onToggle ? (
-              <button
-                type="button"
-                className="pl-button pl-button-quiet pl-button-small"
-                aria-label={`${cell.status === 'closed' ? 'Reopen' : 'Close'} cell ${cell.label}`}
-                onClick={() => onToggle(cell)}
-              >
-                {cell.status === 'closed' ? 'Reopen' : 'Close'}
-              </button>
-            ) : null}
+            {onToggle ? <CellToggleButton cell={cell} onToggle={onToggle} /> : null}
           </div>
         </li>
       ))}

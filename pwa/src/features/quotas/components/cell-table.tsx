@@ -2,6 +2,7 @@ import { formatCount, formatPercent } from '../../../lib/format';
 import type { Cell } from '../api/get-quota-board';
 import { type BoardView, type SortColumn } from './board-view';
 import { CellStatusTag } from './cell-status-tag';
+import { CellToggleButton } from './cell-toggle-button';
 import { FillBar } from './fill-bar';
 
 interface CellTableProps {
@@ -74,14 +75,7 @@ export function CellTable({ cells, view, onSort, onToggle }: CellTableProps) {
               </td>
               {onToggle ? (
                 <td>
-                  <button
-                    type="button"
-                    className="pl-button pl-button-quiet pl-button-small"
-                    aria-label={`${cell.status === 'closed' ? 'Reopen' : 'Close'} cell ${cell.label}`}
-                    onClick={() => onToggle(cell)}
-                  >
-                    {cell.status === 'closed' ? 'Reopen' : 'Close'}
-                  </button>
+                  <CellToggleButton cell={cell} onToggle={onToggle} />
                 </td>
               ) : null}
             </tr>
