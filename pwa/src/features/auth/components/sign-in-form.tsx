@@ -2,6 +2,7 @@ import { useId, useState, type FormEvent } from 'react';
 import { isApiError } from '../../../lib/api-error';
 import { useOnline } from '../../../hooks/use-online';
 import { useSignIn } from '../api/sign-in';
+import { FormProblem } from '../../../components/form-problem';
 
 export const offlineSignInMessage =
   'You are offline: signing in needs the network once; work already on this device is kept.';
@@ -36,11 +37,7 @@ export function SignInForm() {
           {offlineSignInMessage}
         </p>
       ) : null}
-      {signIn.isError ? (
-        <p className="pl-form-problem" role="alert" id={ids.problem}>
-          {messageFor(signIn.error)}
-        </p>
-      ) : null}
+      <FormProblem message={signIn.isError && messageFor(signIn.error)} id={ids.problem} />
 
       <div className="pl-field">
         <label htmlFor={ids.email}>E-mail</label>

@@ -1,4 +1,5 @@
 import { Dialog } from '../../../components/dialog';
+import { FormProblem } from '../../../components/form-problem';
 import { useUnsentCount } from '../../../db/outbox-store';
 import type { SessionUser } from '../../../db/plumbline-db';
 import { useSignOut } from '../api/sign-out';
@@ -26,11 +27,7 @@ export function SignOutDialog({ user, onClose }: SignOutDialogProps) {
       ) : (
         <p>Nothing is waiting to be sent from this device.</p>
       )}
-      {signOut.isError ? (
-        <p role="alert" className="pl-form-problem">
-          Signing out did not finish. Please try again.
-        </p>
-      ) : null}
+      <FormProblem message={signOut.isError && 'Signing out did not finish. Please try again.'} />
       <div className="pl-dialog-actions">
         <button type="button" className="pl-button pl-button-quiet" onClick={onClose} autoFocus>
           Stay signed in

@@ -12,6 +12,7 @@ import { AnswerStep } from './answer-step';
 import { CategoriesStep } from './categories-step';
 import { CellCheckStep } from './cell-check-step';
 import { OutcomeStep } from './outcome-step';
+import { FormProblem } from '../../../components/form-problem';
 
 type Step = 'outcome' | 'confirm' | 'categories' | 'check' | 'answer';
 
@@ -77,11 +78,7 @@ export function LogContact({ userId, project, status, onSaved, onCancel }: LogCo
       <p className="pl-muted pl-small pl-privacy">
         Record no names, addresses or phone numbers: only categories, the answer and times.
       </p>
-      {problem ? (
-        <p className="pl-form-problem" role="alert">
-          {problem}
-        </p>
-      ) : null}
+      <FormProblem message={problem} />
 
       {step === 'outcome' ? <OutcomeStep onChoose={choose} /> : null}
 

@@ -1,5 +1,6 @@
 import type { Project } from '../../../lib/projects/get-projects';
 import { useUpdateProject, type ProjectStatus } from '../api/update-project';
+import { FormProblem } from '../../../components/form-problem';
 
 export const statusWords: Record<string, string> = {
   setup: 'Being set up',
@@ -38,11 +39,7 @@ export function StatusControl({ project }: { project: Project }) {
           </button>
         ))}
       </div>
-      {update.error ? (
-        <p className="pl-form-problem" role="alert">
-          {update.error.message}
-        </p>
-      ) : null}
+      <FormProblem message={update.error?.message} />
     </div>
   );
 }

@@ -4,6 +4,7 @@ import type { Role } from '../../../config/roles';
 import { useUsers, type OrganisationUser } from '../../../lib/users/get-users';
 import { useMembers, type Member } from '../api/get-members';
 import { useSetMembers } from '../api/set-members';
+import { FormProblem } from '../../../components/form-problem';
 
 const groups: { role: Role; title: string }[] = [
   { role: 'interviewer', title: 'Interviewers' },
@@ -59,11 +60,7 @@ function TeamChecklist({ projectId, people, members }: { projectId: string; peop
           );
         })}
       </div>
-      {setMembers.error ? (
-        <p className="pl-form-problem" role="alert">
-          {setMembers.error.message}
-        </p>
-      ) : null}
+      <FormProblem message={setMembers.error?.message} />
       <div className="pl-form-actions">
         <button
           type="button"

@@ -6,6 +6,7 @@ import { isApiError } from '../../../lib/api-error';
 import { useCreateProject } from '../api/create-project';
 import { checkDraft, deviceTimeZone, emptyDraft, type DraftProblems, type ProjectDraft } from '../components/project-form-checks';
 import { TextField } from '../components/text-field';
+import { FormProblem } from '../../../components/form-problem';
 
 /** Every zone the browser knows, with the chosen one first if it is missing from the list. */
 function timeZones(chosen: string): string[] {
@@ -73,11 +74,7 @@ export function NewProjectPage() {
             {serverProblem('timeZone') ?? 'Where the fieldwork happens: field days and “today” on the quota board follow this zone.'}
           </span>
         </div>
-        {create.error ? (
-          <p className="pl-form-problem" role="alert">
-            {create.error.message}
-          </p>
-        ) : null}
+        <FormProblem message={create.error?.message} />
         <div className="pl-form-actions">
           <button type="submit" className="pl-button pl-button-main" disabled={create.isPending}>
             {create.isPending ? 'Creating…' : 'Create project'}

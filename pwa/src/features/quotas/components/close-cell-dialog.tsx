@@ -1,6 +1,7 @@
 import { Dialog } from '../../../components/dialog';
 import { formatCount } from '../../../lib/format';
 import type { Cell } from '../api/get-quota-board';
+import { FormProblem } from '../../../components/form-problem';
 
 interface CloseCellDialogProps {
   cell: Cell;
@@ -23,11 +24,7 @@ export function CloseCellDialog({ cell, busy, problem, onConfirm, onCancel }: Cl
           ? 'Interviewers will see the cell as closed at their next sync and are warned before logging another interview in it. Interviews already logged are kept.'
           : 'Interviewers will see the cell open again at their next sync.'}
       </p>
-      {problem ? (
-        <p className="pl-form-problem" role="alert">
-          {problem}
-        </p>
-      ) : null}
+      <FormProblem message={problem} />
       <div className="pl-dialog-actions">
         <button type="button" className="pl-button pl-button-quiet" onClick={onCancel}>
           Cancel
