@@ -3,22 +3,11 @@ import '@testing-library/jest-dom/vitest';
 import { cleanup } from '@testing-library/react';
 import { afterEach, beforeEach, vi } from 'vitest';
 import { db } from '../db/plumbline-db';
+import { mediaQueryList } from './wide-screen';
 
-// jsdom has no matchMedia; Ionic and the shell ask it about screen width (phone layout here).
+// Phone layout unless a test asks for a wide screen (see wide-screen.ts).
 if (!window.matchMedia) {
-  Object.defineProperty(window, 'matchMedia', {
-    writable: true,
-    value: (query: string) => ({
-      matches: false,
-      media: query,
-      onchange: null,
-      addListener: () => {},
-      removeListener: () => {},
-      addEventListener: () => {},
-      removeEventListener: () => {},
-      dispatchEvent: () => false,
-    }),
-  });
+  Object.defineProperty(window, 'matchMedia', { writable: true, value: (query: string) => mediaQueryList(query, false) });
 }
 
 // jsdom has no ResizeObserver; the balance charts' responsive container asks for one.

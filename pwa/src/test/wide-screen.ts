@@ -1,9 +1,9 @@
 import { vi } from 'vitest';
 
-/** Makes the app lay itself out for a desktop (side navigation, tables). */
-export function onWideScreen(): void {
-  vi.spyOn(window, 'matchMedia').mockImplementation((query: string) => ({
-    matches: true,
+/** A MediaQueryList stand-in: jsdom has no matchMedia; Ionic and the shell ask it about screen width. */
+export function mediaQueryList(query: string, matches: boolean): MediaQueryList {
+  return {
+    matches,
     media: query,
     onchange: null,
     addListener: () => {},
@@ -11,5 +11,10 @@ export function onWideScreen(): void {
     addEventListener: () => {},
     removeEventListener: () => {},
     dispatchEvent: () => false,
-  }));
+  };
+}
+
+/** Makes the app lay itself out for a desktop (side navigation, tables). */
+export function onWideScreen(): void {
+  vi.spyOn(window, 'matchMedia').mockImplementation((query: string) => mediaQueryList(query, true));
 }
