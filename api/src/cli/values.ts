@@ -1,12 +1,7 @@
+import { parseNumber } from '../formats/numbers.js';
 import { CliInputError } from './errors.js';
 
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
-
-/** A decimal number written in plain or scientific notation; anything else is null. */
-export function parseNumber(text: string): number | null {
-  const t = text.trim();
-  return NUMBER.test(t) ? Number(t) : null;
-}
+export { parseNumber };
 
 export function numberOption(value: string | undefined, name: string, check: (x: number) => boolean, rule: string): number | undefined {
   if (value === undefined) return undefined;

@@ -1,6 +1,7 @@
 // Population targets as text: `variable,category,share`, one category a line. Shared by
 // the API (uploaded files) and the `plumbline` command line (files on disk).
 import { parse } from 'csv-parse/sync';
+import { parseNumber } from './numbers.js';
 
 export interface TargetShare {
   category: string;
@@ -25,11 +26,9 @@ const COLUMNS = ['variable', 'category', 'share'] as const;
 
 /** Reads a share: "0.25", "25", and with semicolon files also the decimal comma "0,25". */
 function parseShare(text: string, decimalComma: boolean): number | null {
-  let t = text.trim();
-  if (decimalComma && /^\d+,\d+$/.test(t)) t = t.replace(',', '.');
-  if (!/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(t)) return null;
-  const value = Number(t);
-  return Number.isFinite(value) ? value : null;
+  const t = text.trim();
+  const value = parseNumber(decimalComma && /^\d+,\d+$/.test(t) ? t.replace(',', '.') : t);
+  return value !== null && Number.isFinite(value) ? value : null;
 }
 
 /** Picks the delimiter from the header line: a semicolon file has no comma in its header. */

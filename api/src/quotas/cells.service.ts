@@ -36,7 +36,10 @@ export interface InterviewerProgress {
   overQuota: number;
 }
 
-/** SQL condition for interviews that count toward a cell: completes not rejected on review. */
+/**
+ * SQL condition for interviews that count toward a cell: completes not rejected on review.
+ * The triggers behind interview_counts (migration 20261202000400) apply the same rule.
+ */
 export const counted = (alias = 'interviews') =>
   `${alias}.disposition = 'complete' AND ${alias}.review_status <> 'rejected'`;
 
