@@ -46,6 +46,7 @@ export default defineConfig({
           include: ['pwa/src/**/*.test.{ts,tsx}'],
           environment: 'jsdom',
           setupFiles: ['pwa/src/test/setup.ts'],
+          testTimeout: 20_000,
         },
       },
       {

@@ -1,6 +1,8 @@
 import { IonApp, setupIonicReact } from '@ionic/react';
 import { IonReactRouter } from '@ionic/react-router';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import { useEffect } from 'react';
+import { startConnectivityWatch } from '../lib/connectivity-watch';
 import { AppRoutes } from './app-routes';
 import { ErrorBoundary } from './error-boundary';
 
@@ -8,6 +10,7 @@ setupIonicReact({ mode: 'md' });
 
 /** The whole app; tests pass a fresh query client for each render. */
 export function App({ queryClient }: { queryClient: QueryClient }) {
+  useEffect(() => startConnectivityWatch(), []);
   return (
     <QueryClientProvider client={queryClient}>
       <IonApp>

@@ -1,15 +1,9 @@
-import { useSyncExternalStore } from 'react';
+import { seemsReachable, useReachability } from '../lib/reachability';
 
-function subscribe(onChange: () => void): () => void {
-  window.addEventListener('online', onChange);
-  window.addEventListener('offline', onChange);
-  return () => {
-    window.removeEventListener('online', onChange);
-    window.removeEventListener('offline', onChange);
-  };
-}
-
-/** Whether the browser believes it has a network connection right now. */
+/**
+ * Whether the office (the API) can be reached right now, as the last real request showed;
+ * before any request, the browser's hint. Never the browser's online flag alone.
+ */
 export function useOnline(): boolean {
-  return useSyncExternalStore(subscribe, () => navigator.onLine, () => true);
+  return seemsReachable(useReachability());
 }

@@ -1,11 +1,16 @@
 // The only module that talks HTTP. Base path /api on the same origin; the bearer token
 // comes from the device session (db/session-store). On a 401 it refreshes once (one
 // refresh shared by all concurrent requests), stores the rotated tokens and retries once.
-// Offline, a request fails at once with an ApiError of kind 'offline' and nothing is lost:
-// the device's own data lives in Dexie, not here.
+// Every request is really tried, whatever the browser's online flag says, and its outcome
+// is reported to lib/reachability: an answer from the API means the office is reachable
+// (a 503 while its database is down is an answer: the session is kept, work is retried);
+// a network failure, a time-out or a gateway saying it cannot reach the API (502, 504)
+// means it is not, and the request fails with an ApiError of kind 'offline'. Nothing is
+// lost offline: the device's own data lives in Dexie, not here.
 import { clearSession, readSession, saveSession } from '../db/session-store';
 import type { SessionUser } from '../db/plumbline-db';
 import { ApiError, offlineMessage, signedOutMessage, type FieldProblem } from './api-error';
+import { reportReached, reportUnreachable } from './reachability';
 
 const basePath = '/api';
 
@@ -22,7 +27,13 @@ export interface RequestOptions {
   /** Send the bearer token and refresh it on 401 (default true). */
   auth?: boolean;
   signal?: AbortSignal;
+  /** Give up (as unreachable) after this many milliseconds; default 30 s. */
+  timeoutMs?: number;
 }
+
+const DEFAULT_TIMEOUT_MS = 30_000;
+/** Gateway statuses: something between the device and the API could not reach the API. */
+const GATEWAY_FAILED = new Set([502, 504]);
 
 let refreshInFlight: Promise<string> | null = null;
 
@@ -69,25 +80,41 @@ async function runRefresh(staleAccessToken: string): Promise<string> {
 }
 
 async function send(path: string, options: RequestOptions, accessToken?: string): Promise<Response> {
-  if (typeof navigator !== 'undefined' && navigator.onLine === false) {
-    throw new ApiError(offlineMessage, 'offline');
-  }
   const headers: Record<string, string> = { Accept: 'application/json' };
   // A FormData body (a file upload) goes as multipart; the browser sets its boundary.
   const multipart = typeof FormData !== 'undefined' && options.body instanceof FormData;
   if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
   if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
+  const timeout = AbortSignal.timeout(options.timeoutMs ?? DEFAULT_TIMEOUT_MS);
+  let response: Response;
   try {
-    return await fetch(`${basePath}${path}`, {
+    response = await fetch(`${basePath}${path}`, {
       method: options.method ?? 'GET',
       headers,
       body: options.body === undefined ? undefined : multipart ? (options.body as FormData) : JSON.stringify(options.body),
-      signal: options.signal,
+      signal: options.signal ? AbortSignal.any([options.signal, timeout]) : timeout,
       credentials: 'same-origin',
     });
   } catch (error) {
-    if (error instanceof DOMException && error.name === 'AbortError') throw error;
+    // The caller gave up: that says nothing about the network.
+    if (options.signal?.aborted) throw error;
+    reportUnreachable();
     throw new ApiError(offlineMessage, 'offline');
+  }
+  if (GATEWAY_FAILED.has(response.status)) {
+    reportUnreachable();
+    throw new ApiError(offlineMessage, 'offline', response.status);
+  }
+  reportReached();
+  return response;
+}
+
+/** One cheap request (GET /api/health): whether the office answers and is ready for work; never throws. */
+export async function probeOffice(timeoutMs = 8_000): Promise<boolean> {
+  try {
+    return (await send('/health', { timeoutMs })).ok;
+  } catch {
+    return false;
   }
 }
 

@@ -4,7 +4,7 @@
 import { v4 as uuidv4 } from 'uuid';
 import { addToOutbox } from '../db/outbox-store';
 import type { InterviewRecord } from '../db/plumbline-db';
-import { requestSync } from './sync-engine';
+import { syncNow } from './sync-scheduler';
 
 export type ContactDraft = Omit<InterviewRecord, 'id' | 'endedAt'>;
 
@@ -15,6 +15,6 @@ export async function logContact(interviewerId: string, projectId: string, draft
     delete record.headlineAnswer;
   }
   await addToOutbox(interviewerId, projectId, record);
-  if (navigator.onLine) void requestSync();
+  void syncNow();
   return record;
 }

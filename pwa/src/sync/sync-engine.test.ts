@@ -5,6 +5,7 @@ import { completeEntry, syncedBefore, tramCells, tramProject, tramVariables } fr
 import { signedInAs } from '../test/render-app';
 import { requestSync, whenSyncIdle } from './sync-engine';
 import { readProgress, resetProgress } from './sync-progress';
+import { readReachability } from '../lib/reachability';
 
 const me = 'user-interviewer';
 const who = { 'v-age': 'c-old', 'v-region': 'c-quay' };
@@ -140,14 +141,26 @@ describe('sync module', () => {
     expect(await db.outbox.count()).toBe(0);
   });
 
-  it('sends nothing while offline and keeps the outbox', async () => {
+  it('sends nothing while the network is cut, even when the browser claims to be online, and keeps the outbox', async () => {
+    serve();
+    api.setNetwork('down');
+    await db.outbox.add(completeEntry(1, me, who));
+
+    expect(navigator.onLine).toBe(true);
+    expect(await requestSync()).toBe('offline');
+    expect(api.calls).toEqual([]);
+    expect(await db.outbox.count()).toBe(1);
+    expect(readReachability().reach).toBe('unreachable');
+  });
+
+  it('still tries when the browser claims to be offline: the flag is only a hint', async () => {
     serve();
     Object.defineProperty(navigator, 'onLine', { configurable: true, get: () => false });
     try {
       await db.outbox.add(completeEntry(1, me, who));
-      expect(await requestSync()).toBe('offline');
-      expect(api.calls).toEqual([]);
-      expect(await db.outbox.count()).toBe(1);
+      expect(await requestSync()).toBe('done');
+      expect(await db.outbox.count()).toBe(0);
+      expect(readReachability().reach).toBe('reachable');
     } finally {
       Object.defineProperty(navigator, 'onLine', { configurable: true, get: () => true });
     }

@@ -3,8 +3,8 @@
 // batches of at most 1,000, and applies each reply in one transaction (db/sync-store):
 // acknowledged entries leave the device, refused ones keep their reason, the returned cell
 // counts become the cached cell status. Then it refreshes the cached projects and cells.
-// Offline, signed out or with the connection dropped mid-batch it stops and keeps
-// everything: an entry is removed only after the server's reply names it. Other people's
+// It always tries the network (the browser's online flag is not trusted). Unreachable,
+// signed out or with the connection dropped mid-batch it stops and keeps everything: an entry is removed only after the server's reply names it. Other people's
 // entries on the device are never read for sending. One run at a time; a request during a
 // run queues exactly one more run.
 import { readSession } from '../db/session-store';
@@ -57,10 +57,6 @@ async function syncOnce(): Promise<SyncOutcome> {
   const session = await readSession();
   if (!session || session.user.role !== 'interviewer') return 'skipped';
   const userId = session.user.id;
-  if (!navigator.onLine) {
-    reportProgress({ running: false, problems: [] });
-    return 'offline';
-  }
 
   const waiting = await listWaiting(userId);
   reportProgress({ running: true, sent: 0, total: waiting.length, problems: [] });
@@ -83,7 +79,7 @@ async function syncOnce(): Promise<SyncOutcome> {
     return problems.length ? 'incomplete' : 'done';
   } catch (error) {
     if (error instanceof Stop) {
-      reportProgress({ running: false, problems: [error.message] });
+      reportProgress({ running: false, problems: [...problems, error.message] });
       return error.outcome;
     }
     reportProgress({ running: false, problems: [...problems, 'Sync stopped unexpectedly. Everything unsent is still on this device.'] });
@@ -117,7 +113,7 @@ async function sendBatch(
     reply = await postInterviewBatch(projectId, batch.map((entry) => entry.payload));
   } catch (error) {
     if (isApiError(error) && error.kind === 'offline') {
-      throw new Stop('offline', 'The connection dropped during sync. Nothing was lost; the rest goes when the network is back.');
+      throw new Stop('offline', 'The office could not be reached. Nothing was lost; the rest goes when the network is back.');
     }
     if (isApiError(error) && error.kind === 'signed-out') {
       throw new Stop('signed-out', 'Your sign-in has ended. Unsent interviews stay on this device until you sign in again.');
@@ -153,7 +149,7 @@ async function refreshCaches(userId: string): Promise<void> {
   } catch (error) {
     if (error instanceof Stop) throw error;
     if (isApiError(error) && error.kind === 'offline') {
-      throw new Stop('offline', 'The connection dropped during sync. Nothing was lost; the rest goes when the network is back.');
+      throw new Stop('offline', 'The office could not be reached. Nothing was lost; the rest goes when the network is back.');
     }
     if (isApiError(error) && error.kind === 'signed-out') {
       throw new Stop('signed-out', 'Your sign-in has ended. Unsent interviews stay on this device until you sign in again.');

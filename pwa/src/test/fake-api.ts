@@ -8,6 +8,8 @@ export interface FakeApi {
   /** Every request the app made, in order. */
   calls: { method: string; path: string; body: unknown; authorization: string | null }[];
   on: (method: string, path: string, handler: Handler) => void;
+  /** Cuts or restores the network: while cut, every request fails as a browser's does ("Failed to fetch"). */
+  setNetwork: (state: 'up' | 'down') => void;
 }
 
 export function json(body: unknown, status = 200): Response {
@@ -22,6 +24,7 @@ export function problem(statusCode: number, error: string, message: string): Res
 export function installFakeApi(): FakeApi {
   const handlers = new Map<string, Handler>();
   const calls: FakeApi['calls'] = [];
+  let network: 'up' | 'down' = 'up';
   vi.stubGlobal(
     'fetch',
     vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
@@ -29,13 +32,20 @@ export function installFakeApi(): FakeApi {
       const method = (init?.method ?? 'GET').toUpperCase();
       const headers = new Headers(init?.headers);
       const body = typeof init?.body === 'string' ? JSON.parse(init.body) : undefined;
+      if (network === 'down') throw new TypeError('Failed to fetch');
       calls.push({ method, path: url.pathname, body, authorization: headers.get('Authorization') });
       const handler = handlers.get(`${method} ${url.pathname}`);
       if (!handler) return problem(404, 'Not Found', `No fake for ${method} ${url.pathname}`);
       return handler({ method, path: url.pathname, body, headers });
     }),
   );
-  return { calls, on: (method, path, handler) => handlers.set(`${method} ${path}`, handler) };
+  return {
+    calls,
+    on: (method, path, handler) => handlers.set(`${method} ${path}`, handler),
+    setNetwork: (state) => {
+      network = state;
+    },
+  };
 }
 
 export const demoNames: Record<Role, string> = {

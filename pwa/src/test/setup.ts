@@ -1,9 +1,13 @@
 import 'fake-indexeddb/auto';
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach, beforeEach, vi } from 'vitest';
 import { db } from '../db/plumbline-db';
+import { resetReachability } from '../lib/reachability';
 import { mediaQueryList } from './wide-screen';
+
+// Lazily loaded pages take more than the default second to appear on a busy 2-core machine.
+configure({ asyncUtilTimeout: 5000 });
 
 // Phone layout unless a test asks for a wide screen (see wide-screen.ts).
 if (!window.matchMedia) {
@@ -21,6 +25,7 @@ if (!('ResizeObserver' in window)) {
 }
 
 beforeEach(async () => {
+  resetReachability();
   await Promise.all(db.tables.map((table) => table.clear()));
   window.localStorage.clear();
   window.history.replaceState(null, '', '/');

@@ -1,6 +1,6 @@
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { db } from '../../../db/plumbline-db';
 import { readSession } from '../../../db/session-store';
 import { countUnsent } from '../../../db/outbox-store';
@@ -50,8 +50,7 @@ describe('signing out', () => {
   });
 
   it('signs out even when the network is gone, still keeping the outbox', async () => {
-    installFakeApi();
-    vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(false);
+    installFakeApi().setNetwork('down');
     await signedInAs('interviewer');
     await addUnsentInterviews(1);
     renderApp('/interviewer');
@@ -68,8 +67,7 @@ describe('signing out', () => {
   });
 
   it('counts only the signed-in interviewer’s own waiting interviews, and keeps everyone’s', async () => {
-    installFakeApi();
-    vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(false);
+    installFakeApi().setNetwork('down');
     await signedInAs('interviewer');
     await addUnsentInterviews(2);
     await addUnsentInterviews(3, 'user-someone-else', 2);

@@ -1,6 +1,6 @@
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { installFakeApi, json, problem, authResponse } from '../../../test/fake-api';
 import { renderApp } from '../../../test/render-app';
 import { readSession } from '../../../db/session-store';
@@ -44,8 +44,7 @@ describe('sign-in page', () => {
   });
 
   it('explains that signing in needs the network once when the device is offline', async () => {
-    installFakeApi();
-    vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(false);
+    installFakeApi().setNetwork('down');
     renderApp('/sign-in');
     const user = userEvent.setup();
 

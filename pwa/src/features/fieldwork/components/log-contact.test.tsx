@@ -9,20 +9,14 @@ import { whenSyncIdle } from '../../../sync/sync-engine';
 
 const me = 'user-interviewer';
 
-function setOnline(online: boolean) {
-  Object.defineProperty(navigator, 'onLine', { configurable: true, get: () => online });
-}
-
 beforeEach(async () => {
-  // Offline: the screen must work from the device alone, and no sync interferes.
-  setOnline(false);
-  installFakeApi();
+  // Offline (the network cut, whatever the browser claims): the screen must work from the device alone.
+  installFakeApi().setNetwork('down');
   await signedInAs('interviewer');
 });
 
 afterEach(async () => {
   await whenSyncIdle();
-  setOnline(true);
 });
 
 async function startComplete(age: string, region: string) {

@@ -1,23 +1,22 @@
 import { formatCount, formatMoment } from '../../../lib/format';
-import { requestSync } from '../../../sync/sync-engine';
+import { syncNow } from '../../../sync/sync-scheduler';
 import { useSyncProgress } from '../../../sync/sync-progress';
 
 interface SendPanelProps {
   waiting: number;
   lastSync: string | null;
-  online: boolean;
 }
 
 /** Sync on demand, its progress while it runs, and the time the office last got everything. */
-export function SendPanel({ waiting, lastSync, online }: SendPanelProps) {
+export function SendPanel({ waiting, lastSync }: SendPanelProps) {
   const progress = useSyncProgress();
   return (
     <div className="pl-send">
       <button
         type="button"
         className="pl-button pl-button-main pl-button-wide"
-        disabled={!online || progress.running}
-        onClick={() => void requestSync()}
+        disabled={progress.running}
+        onClick={() => void syncNow()}
       >
         {waiting > 0 ? 'Send now' : 'Sync now'}
       </button>

@@ -10,19 +10,13 @@ import { whenSyncIdle } from '../../../sync/sync-engine';
 const me = 'user-interviewer';
 const who = { 'v-age': 'c-old', 'v-region': 'c-quay' };
 
-function setOnline(online: boolean) {
-  Object.defineProperty(navigator, 'onLine', { configurable: true, get: () => online });
-}
-
 afterEach(async () => {
   await whenSyncIdle();
-  setOnline(true);
 });
 
 describe('outbox page', () => {
   it('shows that nothing is waiting and that work stays on the device until the office has it', async () => {
-    setOnline(false);
-    installFakeApi();
+    installFakeApi().setNetwork('down');
     await signedInAs('interviewer');
     renderApp('/interviewer/outbox');
 
@@ -33,8 +27,7 @@ describe('outbox page', () => {
   });
 
   it('lists what waits, offline, with outcome and project, and leaves another person’s entries alone', async () => {
-    setOnline(false);
-    installFakeApi();
+    installFakeApi().setNetwork('down');
     await signedInAs('interviewer');
     await syncedBefore(me);
     await db.outbox.bulkAdd([completeEntry(1, me, who), completeEntry(2, me, who), completeEntry(3, 'user-other', who)]);
@@ -46,7 +39,12 @@ describe('outbox page', () => {
     expect(within(list).getAllByText('Complete')).toHaveLength(2);
     expect(within(list).getAllByText('Vellmoor tram extension')).toHaveLength(2);
     expect(screen.getByText(/1 more contact was logged on this device by someone else/)).toBeInTheDocument();
-    expect(screen.getByRole('button', { name: 'Send now' })).toBeDisabled();
+    expect(await screen.findByText(/The office cannot be reached right now/)).toBeInTheDocument();
+
+    // Send now still tries (the browser's online flag is not trusted); with the network cut it keeps everything.
+    await userEvent.setup().click(screen.getByRole('button', { name: 'Send now' }));
+    expect(await screen.findByText(/Nothing was lost; the rest goes when the network is back/)).toBeInTheDocument();
+    expect(await db.outbox.count()).toBe(3);
   });
 
   it('sends on demand, then shows the refused entry with its reason until it is discarded on purpose', async () => {

@@ -45,10 +45,10 @@ export function OutboxPage() {
             </p>
             {!online ? (
               <p className="pl-note-offline" role="status">
-                You are offline. Unsent interviews stay here and go to the office when the network is back.
+                The office cannot be reached right now. Unsent interviews stay here and go to the office as soon as it answers.
               </p>
             ) : null}
-            <SendPanel waiting={waiting.length} lastSync={lastSync} online={online} />
+            <SendPanel waiting={waiting.length} lastSync={lastSync} />
           </section>
           {waiting.length > 0 ? (
             <EntryList entries={waiting} projectNames={names} />

@@ -1,6 +1,6 @@
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { authResponse, installFakeApi, json, problem } from '../../../test/fake-api';
 import { renderApp, signedInAs } from '../../../test/render-app';
 
@@ -49,8 +49,7 @@ describe("lead's projects page", () => {
   });
 
   it('says the list needs the network when the device is offline', async () => {
-    installFakeApi();
-    vi.spyOn(navigator, 'onLine', 'get').mockReturnValue(false);
+    installFakeApi().setNetwork('down');
     await signedInAs('lead');
     renderApp('/lead');
 
