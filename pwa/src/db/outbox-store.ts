@@ -22,14 +22,21 @@ export function isRejected(entry: OutboxEntry): boolean {
   return typeof entry.rejectedReason === 'string';
 }
 
-/** Writes one contact to the device. Nothing else happens before this has finished. */
+/**
+ * Writes one contact to the device. Nothing else happens before this has finished. The
+ * interviewer's draft goes in the same transaction, so a crash cannot leave both (and a
+ * resumed draft saved twice).
+ */
 export async function addToOutbox(interviewerId: string, projectId: string, record: InterviewRecord): Promise<void> {
-  await db.outbox.add({
-    clientId: record.id,
-    interviewerId,
-    projectId,
-    createdAt: new Date().toISOString(),
-    payload: record,
+  await db.transaction('rw', db.outbox, db.drafts, async () => {
+    await db.outbox.add({
+      clientId: record.id,
+      interviewerId,
+      projectId,
+      createdAt: new Date().toISOString(),
+      payload: record,
+    });
+    await db.drafts.delete(interviewerId);
   });
 }
 

@@ -7,6 +7,10 @@
 //   meta          small device facts (e.g. when this interviewer last synced).
 //   projectCache  (v2) each interviewer's assigned projects as last seen online.
 //   cellCache     (v2) each project's quota variables and cell counts from the last sync.
+//   drafts        (v3) the contact each interviewer is in the middle of logging, saved after
+//                 every step, so a reload, a crash or a closed tab returns to the same step
+//                 with the same answers. Saving the contact moves it to the outbox and
+//                 deletes the draft in one transaction.
 // Everything here works offline; nothing here is ever sent except by the sync module.
 import { Dexie, type EntityTable, type Table } from 'dexie';
 import type { Role } from '../config/roles';
@@ -57,6 +61,22 @@ export interface OutboxEntry {
   rejectedAt?: string;
 }
 
+/** Where a contact being logged had got to. */
+export type DraftStep = 'outcome' | 'confirm' | 'categories' | 'check' | 'answer';
+
+export interface ContactDraft {
+  /** One draft per interviewer on the device. */
+  interviewerId: string;
+  projectId: string;
+  step: DraftStep;
+  disposition: Disposition;
+  categories: Record<string, string>;
+  headlineAnswer?: boolean;
+  /** When the contact was started (becomes the interview's startedAt). */
+  startedAt: string;
+  updatedAt: string;
+}
+
 export interface MetaEntry {
   key: string;
   value: unknown;
@@ -90,6 +110,7 @@ export class PlumblineDb extends Dexie {
   meta!: EntityTable<MetaEntry, 'key'>;
   projectCache!: Table<CachedProject, [string, string]>;
   cellCache!: EntityTable<CachedCells, 'projectId'>;
+  drafts!: EntityTable<ContactDraft, 'interviewerId'>;
 
   constructor() {
     super('plumbline');
@@ -106,6 +127,8 @@ export class PlumblineDb extends Dexie {
       projectCache: '[userId+projectId], userId',
       cellCache: 'projectId',
     });
+    // v3 adds drafts of contacts being logged.
+    this.version(3).stores({ drafts: 'interviewerId' });
   }
 }
 

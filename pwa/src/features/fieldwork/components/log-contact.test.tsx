@@ -1,9 +1,9 @@
-import { screen, within } from '@testing-library/react';
+import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { db, type InterviewRecord } from '../../../db/plumbline-db';
 import { installFakeApi } from '../../../test/fake-api';
-import { cell, completeEntry, syncedBefore, tramCells } from '../../../test/field-fixtures';
+import { cell, completeEntry, syncedBefore, tramCells, tramProject } from '../../../test/field-fixtures';
 import { renderApp, signedInAs } from '../../../test/render-app';
 import { whenSyncIdle } from '../../../sync/sync-engine';
 
@@ -91,5 +91,71 @@ describe('logging a contact', () => {
     const [entry] = await db.outbox.toArray();
     expect(Object.keys(entry!.payload as object).sort()).toEqual(['disposition', 'endedAt', 'id', 'startedAt']);
     expect(entry!.interviewerId).toBe(me);
+  });
+});
+
+describe('a contact left half logged', () => {
+  it('opens again at the same step with the same answers after the app restarts', async () => {
+    await syncedBefore(me);
+    const user = await startComplete('35+', 'Old Quay');
+    await user.click(screen.getByRole('button', { name: 'Start the interview' }));
+    await user.click(screen.getByRole('radio', { name: 'No' }));
+    await vi.waitFor(async () => expect((await db.drafts.get(me))?.headlineAnswer).toBe(false));
+    const startedAt = (await db.drafts.get(me))!.startedAt;
+
+    // A reload or a crash: everything on screen goes, the device's storage stays.
+    cleanup();
+    renderApp('/interviewer');
+
+    expect(await screen.findByText('Do you support extending the tram line?')).toBeInTheDocument();
+    expect(screen.getByRole('radio', { name: 'No' })).toBeChecked();
+    await user.click(screen.getByRole('button', { name: 'Save interview' }));
+    expect(await screen.findByText(/Complete saved on this device/)).toBeInTheDocument();
+    const [entry] = await db.outbox.toArray();
+    expect(entry!.payload).toMatchObject({ categories: { 'v-age': 'c-old', 'v-region': 'c-quay' }, headlineAnswer: false, startedAt });
+    expect(await db.drafts.count()).toBe(0);
+  });
+
+  it('asks whether to finish or discard a contact started more than a day ago', async () => {
+    await syncedBefore(me);
+    const twoDaysAgo = new Date(Date.now() - 2 * 24 * 3600 * 1000).toISOString();
+    await db.drafts.put({
+      interviewerId: me,
+      projectId: tramProject.id,
+      step: 'check',
+      disposition: 'complete',
+      categories: { 'v-age': 'c-young', 'v-region': 'c-mardon' },
+      startedAt: twoDaysAgo,
+      updatedAt: twoDaysAgo,
+    });
+    const user = userEvent.setup();
+    renderApp('/interviewer');
+
+    const prompt = await screen.findByRole('region', { name: 'Unfinished contact' });
+    expect(prompt).toHaveTextContent('A complete started');
+    expect(prompt).toHaveTextContent('for Vellmoor tram extension was not saved');
+    await user.click(within(prompt).getByRole('button', { name: 'Finish it' }));
+    expect(await screen.findByRole('list', { name: 'The respondent’s cells' })).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Cancel' }));
+
+    expect(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' })).toBeInTheDocument();
+    expect(await db.drafts.count()).toBe(0);
+    expect(await db.outbox.count()).toBe(0);
+  });
+
+  it('discards an old unfinished contact on request and saves nothing', async () => {
+    await syncedBefore(me);
+    const old = new Date(Date.now() - 30 * 3600 * 1000).toISOString();
+    await db.drafts.put({ interviewerId: me, projectId: tramProject.id, step: 'confirm', disposition: 'refusal', categories: {}, startedAt: old, updatedAt: old });
+    const user = userEvent.setup();
+    renderApp('/interviewer');
+
+    const prompt = await screen.findByRole('region', { name: 'Unfinished contact' });
+    expect(prompt).toHaveTextContent('A refusal started');
+    await user.click(within(prompt).getByRole('button', { name: 'Discard it' }));
+
+    expect(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' })).toBeInTheDocument();
+    expect(await db.drafts.count()).toBe(0);
+    expect(await db.outbox.count()).toBe(0);
   });
 });

@@ -1,9 +1,11 @@
 // Logs one contact in a few taps: outcome; for a complete the respondent's categories, a
 // look at their cells before the interview proper, then the headline answer. startedAt is
-// the moment this screen opened, endedAt the moment of saving; the record goes to the
-// device's outbox first (sync/log-contact), whatever the network.
+// the moment the contact was started, endedAt the moment of saving; the record goes to the
+// device's outbox first (sync/log-contact), whatever the network. Every step is kept as a
+// draft on the device (db/draft-store), so a reload or crash resumes where it stopped.
 import { useEffect, useMemo, useRef, useState } from 'react';
-import type { Disposition, FieldProject } from '../../../db/plumbline-db';
+import { discardDraft, saveDraft } from '../../../db/draft-store';
+import type { ContactDraft, Disposition, DraftStep, FieldProject } from '../../../db/plumbline-db';
 import { dispositionWords } from '../../../lib/fieldwork-words';
 import { respondentCells } from '../../../sync/cell-status';
 import { logContact } from '../../../sync/log-contact';
@@ -14,22 +16,23 @@ import { CellCheckStep } from './cell-check-step';
 import { OutcomeStep } from './outcome-step';
 import { FormProblem } from '../../../components/form-problem';
 
-type Step = 'outcome' | 'confirm' | 'categories' | 'check' | 'answer';
-
 interface LogContactProps {
   userId: string;
   project: FieldProject;
   status: ProjectCellStatus | undefined;
-  onSaved: (message: string) => void;
-  onCancel: () => void;
+  /** A contact left unfinished on this device, to carry on with. */
+  draft?: ContactDraft;
+  /** Both say which contact (by its start) is done with, so a late read of its draft is ignored. */
+  onSaved: (message: string, startedAt: string) => void;
+  onCancel: (startedAt: string) => void;
 }
 
-export function LogContact({ userId, project, status, onSaved, onCancel }: LogContactProps) {
-  const [startedAt] = useState(() => new Date().toISOString());
-  const [step, setStep] = useState<Step>('outcome');
-  const [disposition, setDisposition] = useState<Disposition>('complete');
-  const [categories, setCategories] = useState<Record<string, string>>({});
-  const [answer, setAnswer] = useState<boolean>();
+export function LogContact({ userId, project, status, draft, onSaved, onCancel }: LogContactProps) {
+  const [startedAt] = useState(() => draft?.startedAt ?? new Date().toISOString());
+  const [step, setStep] = useState<DraftStep>(draft?.step ?? 'outcome');
+  const [disposition, setDisposition] = useState<Disposition>(draft?.disposition ?? 'complete');
+  const [categories, setCategories] = useState<Record<string, string>>(draft?.categories ?? {});
+  const [answer, setAnswer] = useState<boolean | undefined>(draft?.headlineAnswer);
   const [saving, setSaving] = useState(false);
   const [problem, setProblem] = useState<string>();
   const variables = status?.variables ?? [];
@@ -40,6 +43,20 @@ export function LogContact({ userId, project, status, onSaved, onCancel }: LogCo
     const content = top.current?.closest('ion-content') as (HTMLElement & { scrollToTop?: (ms?: number) => Promise<void> }) | null;
     void content?.scrollToTop?.(0);
   }, [step]);
+
+  // Kept on the device after every step; nothing is written until the first choice.
+  const started = useRef(draft !== undefined);
+  useEffect(() => {
+    if (!started.current) {
+      started.current = true;
+      return;
+    }
+    void saveDraft({ interviewerId: userId, projectId: project.id, step, disposition, categories, headlineAnswer: answer, startedAt });
+  }, [userId, project.id, step, disposition, categories, answer, startedAt]);
+
+  function cancel() {
+    void discardDraft(userId).then(() => onCancel(startedAt));
+  }
 
   const theirCells = useMemo(
     () => respondentCells(status?.cells ?? [], Object.values(categories)),
@@ -55,7 +72,7 @@ export function LogContact({ userId, project, status, onSaved, onCancel }: LogCo
         startedAt,
         ...(chosen === 'complete' ? { categories, headlineAnswer: answer } : {}),
       });
-      onSaved(`${dispositionWords[chosen]} saved on this device.`);
+      onSaved(`${dispositionWords[chosen]} saved on this device.`, startedAt);
     } catch (error) {
       setSaving(false);
       setProblem(`Could not save on this device: ${error instanceof Error ? error.message : 'unknown problem'}. Nothing was stored; please try again.`);
@@ -71,7 +88,7 @@ export function LogContact({ userId, project, status, onSaved, onCancel }: LogCo
     <div className="pl-log" ref={top}>
       <div className="pl-log-head">
         <p className="pl-log-project">{project.name}</p>
-        <button type="button" className="pl-button pl-button-quiet" onClick={onCancel}>
+        <button type="button" className="pl-button pl-button-quiet" onClick={cancel}>
           Cancel
         </button>
       </div>

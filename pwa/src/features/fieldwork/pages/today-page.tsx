@@ -1,13 +1,16 @@
 // The interviewer's home: assigned projects from the device's cache, each with the way to
-// log a contact. Works offline once the device has synced one time.
+// log a contact. Works offline once the device has synced one time. A contact left half
+// logged (a reload, a crash) opens again at the same step; one older than a day asks first.
 import { useState } from 'react';
 import '../fieldwork.css';
 import { PageFrame } from '../../../components/page-frame';
 import { EmptyPanel, LoadingPanel, OfflinePanel } from '../../../components/state-panels';
+import { discardDraft, isStale, useDraft } from '../../../db/draft-store';
 import { isRejected } from '../../../db/outbox-store';
 import { useOnline } from '../../../hooks/use-online';
 import { useSyncProgress } from '../../../sync/sync-progress';
 import { useBackgroundSync } from '../../../sync/use-background-sync';
+import { DraftPrompt } from '../components/draft-prompt';
 import { LogContact } from '../components/log-contact';
 import { ProjectCard } from '../components/project-card';
 import { SyncLine } from '../components/sync-line';
@@ -20,8 +23,22 @@ export function TodayPage() {
   const progress = useSyncProgress();
   const [logging, setLogging] = useState<string | null>(null);
   const [saved, setSaved] = useState<string>();
+  const draft = useDraft(field?.userId);
+  // The draft just saved or cancelled may still be read for a moment after it is gone.
+  const [closedDraft, setClosedDraft] = useState<string>();
+  const [finishOld, setFinishOld] = useState(false);
+  const openDraft = draft && draft.startedAt !== closedDraft ? draft : undefined;
+  const draftProject = openDraft ? field?.projects.find((p) => p.id === openDraft.projectId) : undefined;
+  const resume = openDraft && draftProject && (finishOld || !isStale(openDraft)) ? openDraft : undefined;
 
-  const project = field?.projects.find((p) => p.id === logging);
+  function close(startedAt: string | undefined, message?: string) {
+    setClosedDraft(startedAt);
+    setFinishOld(false);
+    setLogging(null);
+    if (message) setSaved(message);
+  }
+
+  const project = field?.projects.find((p) => p.id === (logging ?? resume?.projectId));
   if (field && project) {
     return (
       <PageFrame title="Log a contact">
@@ -30,11 +47,21 @@ export function TodayPage() {
           userId={field.userId}
           project={project}
           status={field.cells[project.id]}
-          onCancel={() => setLogging(null)}
-          onSaved={(message) => {
-            setSaved(message);
-            setLogging(null);
-          }}
+          draft={logging ? undefined : resume}
+          onCancel={(startedAt) => close(startedAt)}
+          onSaved={(message, startedAt) => close(startedAt, message)}
+        />
+      </PageFrame>
+    );
+  }
+  if (field && openDraft && draft !== undefined) {
+    return (
+      <PageFrame title="Today">
+        <DraftPrompt
+          draft={openDraft}
+          projectName={draftProject?.name}
+          onFinish={() => setFinishOld(true)}
+          onDiscard={() => void discardDraft(field.userId).then(() => close(openDraft.startedAt))}
         />
       </PageFrame>
     );
@@ -43,7 +70,7 @@ export function TodayPage() {
   const waiting = field?.entries.filter((e) => !isRejected(e)).length ?? 0;
   return (
     <PageFrame title="Today">
-      {!field ? (
+      {!field || draft === undefined ? (
         <LoadingPanel what="your projects" />
       ) : (
         <>
