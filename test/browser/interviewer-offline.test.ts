@@ -1,9 +1,9 @@
 // The interviewer's offline loop in Chromium at phone size, against the built app and API:
 // contacts logged with the network cut survive a reload and reach the office once it is back;
 // a respondent in a closed cell is warned about before the interview and counted over quota.
-import type { Page } from 'playwright-core';
 import { afterEach, describe, expect, inject, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, PHONE, screenshot, signIn, type Browser } from './browser.js';
+import { openBrowser, PHONE, screenshot, signIn, type Browser } from './browser.js';
+import { answerAndSave, api, logComplete, RESPONDENTS, tokenFor, vellmoorId, waitForServiceWorker, type Board } from './fieldwork-steps.js';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser | undefined;
@@ -12,81 +12,15 @@ afterEach(async () => {
   browser = undefined;
 });
 
-async function tokenFor(email: string): Promise<{ token: string; userId: string }> {
-  const response = await fetch(`${baseUrl}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-  });
-  const body = (await response.json()) as { accessToken: string; user: { id: string } };
-  return { token: body.accessToken, userId: body.user.id };
-}
-
-async function api<T>(token: string, path: string, method = 'GET'): Promise<T> {
-  const response = await fetch(`${baseUrl}/api${path}`, { method, headers: { Authorization: `Bearer ${token}` } });
-  if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}`);
-  return (await response.json()) as T;
-}
-
-interface Board {
-  cells: { id: string; label: string; overQuota: number; status: string }[];
-  interviewers: { id: string; completesTotal: number }[];
-}
-
-async function vellmoorId(token: string): Promise<string> {
-  const projects = await api<{ id: string; name: string }[]>(token, '/projects');
-  return projects.find((p) => p.name === 'Vellmoor tram extension')!.id;
-}
-
-/** Waits until the service worker controls the page, so a reload works without network. */
-async function waitForServiceWorker(page: Page): Promise<void> {
-  await page.waitForFunction(async () => {
-    const registration = await navigator.serviceWorker.ready;
-    return Boolean(registration.active && navigator.serviceWorker.controller);
-  });
-}
-
-/** Logs one complete through the screen: outcome, categories, cell check, headline answer. */
-async function logComplete(page: Page, categories: Record<string, string>, answer: 'Yes' | 'No', shotPrefix?: string) {
-  await page.getByRole('button', { name: 'Log a contact for Vellmoor tram extension' }).click();
-  if (shotPrefix) await screenshot(page, `${shotPrefix}-outcome`);
-  await page.getByRole('button', { name: 'Complete', exact: true }).click();
-  for (const [variable, category] of Object.entries(categories)) {
-    await page.getByRole('radiogroup', { name: variable }).getByRole('radio', { name: category, exact: true }).click();
-  }
-  if (shotPrefix) await screenshot(page, `${shotPrefix}-categories`);
-  await page.getByRole('button', { name: 'Check their cells' }).click();
-  await page.getByRole('heading', { name: 'Their cells' }).waitFor();
-  if (shotPrefix) await screenshot(page, `${shotPrefix}-cells`);
-  await page.getByRole('button', { name: 'Start the interview' }).click();
-}
-
-async function answerAndSave(page: Page, answer: 'Yes' | 'No', shotPrefix?: string) {
-  await page.getByRole('radio', { name: answer }).click();
-  if (shotPrefix) await screenshot(page, `${shotPrefix}-answer`);
-  await page.getByRole('button', { name: 'Save interview' }).click();
-  await page.getByText('Complete saved on this device.').waitFor();
-}
-
-// Respondents whose cells the seeded demo leaves open (the demo's sample is short of young
-// men, basic education and the outlying regions), so no full-cell question interrupts.
-const RESPONDENTS: { categories: Record<string, string>; answer: 'Yes' | 'No' }[] = [
-  { categories: { 'Age band': '18-24', Sex: 'male', Region: 'Mardon', Education: 'basic' }, answer: 'Yes' },
-  { categories: { 'Age band': '25-34', Sex: 'female', Region: 'Old Quay', Education: 'secondary' }, answer: 'No' },
-  { categories: { 'Age band': '35-44', Sex: 'male', Region: 'Tarnholm', Education: 'vocational' }, answer: 'Yes' },
-  { categories: { 'Age band': '25-34', Sex: 'male', Region: 'Kestle Vale', Education: 'basic' }, answer: 'No' },
-  { categories: { 'Age band': '45-54', Sex: 'male', Region: 'Mardon', Education: 'secondary' }, answer: 'Yes' },
-];
-
 describe('interviewer offline at phone size', () => {
   it('keeps five interviews logged offline across a reload and delivers them when the network returns', async () => {
-    const supervisor = await tokenFor('supervisor@vellmoor.example');
-    const lead = await tokenFor('lead@vellmoor.example');
-    const interviewer = await tokenFor('interviewer@vellmoor.example');
-    const projectId = await vellmoorId(lead.token);
+    const supervisor = await tokenFor(baseUrl, 'supervisor@vellmoor.example');
+    const lead = await tokenFor(baseUrl, 'lead@vellmoor.example');
+    const interviewer = await tokenFor(baseUrl, 'interviewer@vellmoor.example');
+    const projectId = await vellmoorId(baseUrl, lead.token);
     const completesOf = (board: Board) => board.interviewers.find((i) => i.id === interviewer.userId)?.completesTotal ?? 0;
-    const boardBefore = await api<Board>(supervisor.token, `/projects/${projectId}/quota-board`);
-    const balanceBefore = await api<{ n: number }>(lead.token, `/projects/${projectId}/balance`);
+    const boardBefore = await api<Board>(baseUrl, supervisor.token, `/projects/${projectId}/quota-board`);
+    const balanceBefore = await api<{ n: number }>(baseUrl, lead.token, `/projects/${projectId}/balance`);
 
     browser = await openBrowser(PHONE);
     const { page, context } = browser;
@@ -121,8 +55,8 @@ describe('interviewer offline at phone size', () => {
     expect(await page.locator('.pl-outbox-number').textContent()).toBe('0');
     await screenshot(page, 'interviewer-5-outbox-sent');
 
-    const boardAfter = await api<Board>(supervisor.token, `/projects/${projectId}/quota-board`);
-    const balanceAfter = await api<{ n: number }>(lead.token, `/projects/${projectId}/balance`);
+    const boardAfter = await api<Board>(baseUrl, supervisor.token, `/projects/${projectId}/quota-board`);
+    const balanceAfter = await api<{ n: number }>(baseUrl, lead.token, `/projects/${projectId}/balance`);
     expect(completesOf(boardAfter)).toBe(completesOf(boardBefore) + 5);
     expect(balanceAfter.n).toBe(balanceBefore.n + 5);
     await browser.close();
@@ -145,11 +79,11 @@ describe('interviewer offline at phone size', () => {
   });
 
   it('warns before an interview in a closed cell, and the office sees it over quota', async () => {
-    const supervisor = await tokenFor('supervisor@vellmoor.example');
-    const projectId = await vellmoorId(supervisor.token);
-    const board = await api<Board>(supervisor.token, `/projects/${projectId}/quota-board`);
+    const supervisor = await tokenFor(baseUrl, 'supervisor@vellmoor.example');
+    const projectId = await vellmoorId(baseUrl, supervisor.token);
+    const board = await api<Board>(baseUrl, supervisor.token, `/projects/${projectId}/quota-board`);
     const cell = board.cells.find((c) => c.label === 'age band: 18-24 × sex: female')!;
-    await api(supervisor.token, `/projects/${projectId}/cells/${cell.id}/close`, 'POST');
+    await api(baseUrl, supervisor.token, `/projects/${projectId}/cells/${cell.id}/close`, 'POST');
     try {
       browser = await openBrowser(PHONE);
       const { page } = browser;
@@ -175,10 +109,10 @@ describe('interviewer offline at phone size', () => {
 
       await page.getByRole('link', { name: 'Outbox', exact: true }).click();
       await page.getByText('Nothing is waiting to be sent.').waitFor();
-      const after = await api<Board>(supervisor.token, `/projects/${projectId}/quota-board`);
+      const after = await api<Board>(baseUrl, supervisor.token, `/projects/${projectId}/quota-board`);
       expect(after.cells.find((c) => c.id === cell.id)!.overQuota).toBe(cell.overQuota + 1);
     } finally {
-      await api(supervisor.token, `/projects/${projectId}/cells/${cell.id}/reopen`, 'POST');
+      await api(baseUrl, supervisor.token, `/projects/${projectId}/cells/${cell.id}/reopen`, 'POST');
     }
   });
 });

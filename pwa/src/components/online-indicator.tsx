@@ -14,35 +14,30 @@ function useTicking(active: boolean): number {
 }
 
 /**
- * A small, always-visible note of whether the office can be reached, as real requests
- * showed it (lib/reachability): online, checking, or offline since when and when the
- * device tries again.
+ * A small, always-visible note in the header of whether the office can be reached, as
+ * real requests showed it (lib/reachability): online, checking, or offline.
  */
 export function OnlineIndicator() {
+  const { reach } = useReachability();
+  const [label, tone] = reach === 'reachable' ? ['Online', 'is-online'] : reach === 'unknown' ? ['Checking…', 'is-checking'] : ['Offline', 'is-offline'];
+  return (
+    <span className={`pl-online ${tone}`} role="status" aria-live="polite">
+      <span className="pl-online-dot" aria-hidden="true" />
+      {label}
+    </span>
+  );
+}
+
+/** Under the header while the office is out of reach: since when, and when the device tries again. */
+export function OfflineStrip() {
   const { reach, since, nextTryAt } = useReachability();
   const now = useTicking(reach === 'unreachable' && nextTryAt !== null);
-  if (reach !== 'unreachable') {
-    return (
-      <span className={`pl-online ${reach === 'reachable' ? 'is-online' : 'is-checking'}`} role="status" aria-live="polite">
-        <span className="pl-online-dot" aria-hidden="true" />
-        {reach === 'reachable' ? 'Online' : 'Checking…'}
-      </span>
-    );
-  }
-  const sinceText = since === null ? '' : `since ${formatClock(new Date(since).toISOString())}`;
+  if (reach !== 'unreachable') return null;
   const seconds = nextTryAt === null ? null : Math.max(0, Math.ceil((nextTryAt - now) / 1000));
-  const nextText = seconds === null ? '' : seconds === 0 ? 'trying now' : `next try in ${seconds} s`;
-  const detail = [sinceText, nextText].filter(Boolean).join(' · ');
   return (
-    <span
-      className="pl-online is-offline"
-      role="status"
-      aria-live="polite"
-      title={`The office cannot be reached${since === null ? '' : ` ${sinceText}`}. Everything you log stays on this device.`}
-    >
-      <span className="pl-online-dot" aria-hidden="true" />
-      <span>Offline</span>
-      {detail ? <span className="pl-online-detail">{detail}</span> : null}
-    </span>
+    <p className="pl-offline-strip" role="status">
+      <span>Office not reachable{since === null ? '' : ` since ${formatClock(new Date(since).toISOString())}`}</span>
+      {seconds === null ? null : <span>{seconds === 0 ? 'trying now' : `next try in ${seconds} s`}</span>}
+    </p>
   );
 }

@@ -1,6 +1,6 @@
 import { IonContent, IonHeader, IonPage, IonToolbar } from '@ionic/react';
 import type { ReactNode } from 'react';
-import { OnlineIndicator } from './online-indicator';
+import { OfflineStrip, OnlineIndicator } from './online-indicator';
 import { PlumblineLogo } from './plumbline-logo';
 import { useHeaderSlot } from './header-slot';
 
@@ -27,6 +27,7 @@ export function PageFrame({ title, lead, children }: PageFrameProps) {
             {headerSlot}
           </div>
         </IonToolbar>
+        <OfflineStrip />
       </IonHeader>
       <IonContent className="pl-content">
         <div className="pl-page-body">

@@ -79,7 +79,8 @@ async function syncOnce(): Promise<SyncOutcome> {
     return problems.length ? 'incomplete' : 'done';
   } catch (error) {
     if (error instanceof Stop) {
-      reportProgress({ running: false, problems: [...problems, error.message] });
+      // Out of reach is not a problem to list: the connection strip says so, and the scheduler retries.
+      reportProgress({ running: false, problems: error.outcome === 'offline' ? problems : [...problems, error.message] });
       return error.outcome;
     }
     reportProgress({ running: false, problems: [...problems, 'Sync stopped unexpectedly. Everything unsent is still on this device.'] });

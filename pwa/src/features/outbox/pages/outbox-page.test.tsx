@@ -43,7 +43,9 @@ describe('outbox page', () => {
 
     // Send now still tries (the browser's online flag is not trusted); with the network cut it keeps everything.
     await userEvent.setup().click(screen.getByRole('button', { name: 'Send now' }));
-    expect(await screen.findByText(/Nothing was lost; the rest goes when the network is back/)).toBeInTheDocument();
+    await whenSyncIdle();
+    expect(screen.getByText(/Nothing is lost: unsent interviews stay here/)).toBeInTheDocument();
+    expect(await screen.findByText(/Office not reachable since \d\d:\d\d/)).toBeInTheDocument();
     expect(await db.outbox.count()).toBe(3);
   });
 

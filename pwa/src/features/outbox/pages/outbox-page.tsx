@@ -45,7 +45,7 @@ export function OutboxPage() {
             </p>
             {!online ? (
               <p className="pl-note-offline" role="status">
-                The office cannot be reached right now. Unsent interviews stay here and go to the office as soon as it answers.
+                The office cannot be reached right now. Nothing is lost: unsent interviews stay here and go to the office as soon as it answers.
               </p>
             ) : null}
             <SendPanel waiting={waiting.length} lastSync={lastSync} />
