@@ -7,6 +7,7 @@ import { Logger } from 'nestjs-pino';
 import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
 import { bodyErrorHandler } from './common/middleware/body-errors.js';
+import { pwaFiles } from './common/middleware/pwa-files.js';
 import { createValidationPipe } from './common/validation.js';
 import type { AppConfig } from './config/config.js';
 
@@ -36,6 +37,7 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
       },
     }),
   );
+  if (config.pwaDist) app.use(pwaFiles(config.pwaDist));
   app.use(express.json({ limit: config.bodyLimit }));
   app.use(bodyErrorHandler);
   app.setGlobalPrefix('api');

@@ -58,7 +58,10 @@ export class AppModule {
   }
 }
 
-/** The built PWA, served from the same origin; /api stays with the routes above. */
+/**
+ * The page for every other path (the PWA's own routes), so a reload on /interviewer/outbox
+ * works; the built files themselves are served, compressed, by common/middleware/pwa-files.
+ */
 function pwaModules(config: AppConfig): DynamicModule[] {
   if (!config.pwaDist || !existsSync(join(config.pwaDist, 'index.html'))) return [];
   return [

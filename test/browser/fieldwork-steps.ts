@@ -28,11 +28,20 @@ export async function vellmoorId(baseUrl: string, token: string): Promise<string
   return projects.find((p) => p.name === 'Vellmoor tram extension')!.id;
 }
 
-/** Waits until the service worker controls the page, so a reload works without network. */
+/**
+ * Waits until the service worker controls the page and holds every script and style the
+ * page has loaded, so a reload works without network.
+ */
 export async function waitForServiceWorker(page: Page): Promise<void> {
   await page.waitForFunction(async () => {
     const registration = await navigator.serviceWorker.ready;
-    return Boolean(registration.active && navigator.serviceWorker.controller);
+    if (!registration.active || !navigator.serviceWorker.controller) return false;
+    const files = performance
+      .getEntriesByType('resource')
+      .map((entry) => new URL(entry.name))
+      .filter((url) => url.origin === location.origin && url.pathname.startsWith('/assets/'));
+    const held = await Promise.all(files.map(async (url) => (await caches.match(url.href)) !== undefined));
+    return held.every(Boolean);
   });
 }
 

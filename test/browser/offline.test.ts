@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, inject, it } from 'vitest';
 import { openBrowser, PHONE, screenshot, signIn, type Browser } from './browser.js';
+import { waitForServiceWorker } from './fieldwork-steps.js';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser | undefined;
@@ -14,11 +15,8 @@ describe('offline', () => {
     const { page, context } = browser;
     await signIn(page, baseUrl, 'interviewer@vellmoor.example');
     await page.waitForURL(`${baseUrl}/interviewer`);
-    // The service worker must control the page before the network goes.
-    await page.waitForFunction(async () => {
-      const registration = await navigator.serviceWorker.ready;
-      return Boolean(registration.active && navigator.serviceWorker.controller);
-    });
+    // The service worker must control the page and hold its files before the network goes.
+    await waitForServiceWorker(page);
     await context.setOffline(true);
     await page.reload();
     await page.getByRole('heading', { level: 1, name: 'Today' }).first().waitFor();

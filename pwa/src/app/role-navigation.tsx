@@ -1,4 +1,4 @@
-import { lazy, type ReactElement } from 'react';
+import { lazy, type ComponentType, type ReactElement } from 'react';
 import {
   checkmarkDoneOutline,
   cloudUploadOutline,
@@ -13,25 +13,34 @@ import {
   sunnyOutline,
 } from 'ionicons/icons';
 import type { Role } from '../config/roles';
-import { TodayPage } from '../features/fieldwork/pages/today-page';
-import { CellsPage } from '../features/fieldwork/pages/cells-page';
-import { OutboxPage } from '../features/outbox/pages/outbox-page';
-import { QuotaBoardPage } from '../features/quotas/pages/quota-board-page';
-import { ProjectQuotaBoardPage } from '../features/quotas/pages/project-quota-board-page';
-import { ReviewQueuePage } from '../features/review/pages/review-queue-page';
-import { InterviewersPage } from '../features/team/pages/interviewers-page';
-import { ProjectsPage } from '../features/projects/pages/projects-page';
-import { NewProjectPage } from '../features/projects/pages/new-project-page';
-import { BenchmarksPage } from '../features/benchmarks/pages/benchmarks-page';
-import { DeliveryPage } from '../features/delivery/pages/delivery-page';
-import { PeoplePage } from '../features/people/pages/people-page';
 
-// The heavier office pages (charts, the targets editor) load on first use, which keeps the
-// bundle every interviewer's phone downloads small. The service worker still stores them
-// for offline use.
-const ProjectPage = lazy(() => import('../features/projects/pages/project-page').then((m) => ({ default: m.ProjectPage })));
-const BalancePage = lazy(() => import('../features/balance/pages/balance-page').then((m) => ({ default: m.BalancePage })));
-const ProgressPage = lazy(() => import('../features/balance/pages/progress-page').then((m) => ({ default: m.ProgressPage })));
+// Each role's pages come in their own chunk, loaded when that role signs in, so a phone
+// never downloads another role's code; the heavier office pages (charts, the targets
+// editor) load on first use. The service worker keeps what was loaded for offline use.
+type PageModule = Record<string, ComponentType>;
+function page<M extends PageModule>(load: () => Promise<M>, name: keyof M & string) {
+  return lazy(() => load().then((module) => ({ default: module[name]! })));
+}
+const interviewerPages = () => import('./roles/interviewer-pages');
+const supervisorPages = () => import('./roles/supervisor-pages');
+const leadPages = () => import('./roles/lead-pages');
+const adminPages = () => import('./roles/admin-pages');
+
+const TodayPage = page(interviewerPages, 'TodayPage');
+const OutboxPage = page(interviewerPages, 'OutboxPage');
+const CellsPage = page(interviewerPages, 'CellsPage');
+const QuotaBoardPage = page(supervisorPages, 'QuotaBoardPage');
+const ReviewQueuePage = page(supervisorPages, 'ReviewQueuePage');
+const InterviewersPage = page(supervisorPages, 'InterviewersPage');
+const ProjectsPage = page(leadPages, 'ProjectsPage');
+const NewProjectPage = page(leadPages, 'NewProjectPage');
+const ProjectQuotaBoardPage = page(leadPages, 'ProjectQuotaBoardPage');
+const BenchmarksPage = page(leadPages, 'BenchmarksPage');
+const DeliveryPage = page(leadPages, 'DeliveryPage');
+const PeoplePage = page(adminPages, 'PeoplePage');
+const ProjectPage = page(() => import('../features/projects/pages/project-page'), 'ProjectPage');
+const BalancePage = page(() => import('../features/balance/pages/balance-page'), 'BalancePage');
+const ProgressPage = page(() => import('../features/balance/pages/progress-page'), 'ProgressPage');
 
 export interface NavItem {
   path: string;

@@ -1,0 +1,2 @@
+// The admin's pages, loaded as one chunk at sign-in.
+export { PeoplePage } from '../../features/people/pages/people-page';
