@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { apiRequest } from './api-client';
 import { ApiError } from './api-error';
+import { readReachability } from './reachability';
 import { readSession, saveSession } from '../db/session-store';
 import { authResponse, installFakeApi, json, problem } from '../test/fake-api';
 
@@ -86,5 +87,33 @@ describe('api client', () => {
 
     await expect(apiRequest('/projects')).rejects.toMatchObject({ kind: 'offline' });
     expect((await readSession())?.refreshToken).toBe('refresh-lead-old');
+  });
+
+  it('keeps the session while the office answers 503 (its database is down) on a request and on the refresh', async () => {
+    const api = installFakeApi();
+    await saveSession(authResponse('lead', 'old'));
+    const down = () => problem(503, 'Service Unavailable', 'The database is not reachable right now.');
+    api.on('GET', '/api/projects', down);
+    api.on('POST', '/api/auth/refresh', down);
+
+    await expect(apiRequest('/projects')).rejects.toMatchObject({ kind: 'http', status: 503, message: 'The database is not reachable right now.' });
+    expect((await readSession())?.refreshToken).toBe('refresh-lead-old');
+    // The server answered: the office is reachable, only not ready; the device keeps retrying its work.
+    expect(readReachability().reach).toBe('reachable');
+  });
+
+  it('counts a request that never gets an answer as the office out of reach, whatever the browser claims', async () => {
+    const api = installFakeApi();
+    await saveSession(authResponse('lead', 'old'));
+    api.on('GET', '/api/projects', () => json(projects));
+    api.setNetwork('down');
+
+    await expect(apiRequest('/projects')).rejects.toMatchObject({ kind: 'offline' });
+    expect(navigator.onLine).toBe(true);
+    expect(readReachability()).toMatchObject({ reach: 'unreachable', since: expect.any(Number) });
+
+    api.setNetwork('up');
+    await expect(apiRequest('/projects')).resolves.toEqual(projects);
+    expect(readReachability()).toMatchObject({ reach: 'reachable', since: null });
   });
 });

@@ -97,6 +97,19 @@ describe('sync module', () => {
     expect(readProgress().problems).toEqual([]);
   });
 
+  it('keeps the outbox and the sign-in while the office answers 503, and says why', async () => {
+    api.on('POST', `/api/projects/${tramProject.id}/interviews/sync`, () =>
+      problem(503, 'Service Unavailable', 'The database is not reachable right now.'),
+    );
+    await db.outbox.add(completeEntry(1, me, who));
+
+    expect(await requestSync()).toBe('incomplete');
+
+    expect(await db.outbox.count()).toBe(1);
+    expect(await db.session.count()).toBe(1);
+    expect(readProgress().problems).toEqual(['A project: The database is not reachable right now.']);
+  });
+
   it('keeps everything when the server fails, and says so without recording a successful sync', async () => {
     api.on('POST', `/api/projects/${tramProject.id}/interviews/sync`, () => problem(500, 'Internal Server Error', 'boom'));
     await db.outbox.add(completeEntry(1, me, who));
