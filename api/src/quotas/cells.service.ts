@@ -1,5 +1,8 @@
 // Cell counts come from interview_counts (counted interviews per combination of
 // categories, kept by triggers) matched to cells, so the cost follows the number of cells.
+// Per-interviewer progress comes from interviewer_day_counts, so its cost follows
+// interviewers × field days. A counted interview is `interviews.counted` (migration
+// 20261202000700), the one definition the triggers use.
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
@@ -35,13 +38,6 @@ export interface InterviewerProgress {
   contactsTotal: number;
   overQuota: number;
 }
-
-/**
- * SQL condition for interviews that count toward a cell: completes not rejected on review.
- * The triggers behind interview_counts (migration 20261202000400) apply the same rule.
- */
-export const counted = (alias = 'interviews') =>
-  `${alias}.disposition = 'complete' AND ${alias}.review_status <> 'rejected'`;
 
 @Injectable()
 export class CellsService {
@@ -82,20 +78,24 @@ export class CellsService {
     };
   }
 
-  /** Completes per interviewer; "today" is today in the project's time zone. */
+  /**
+   * Completes per interviewer; "today" is today in the project's time zone. Lists the
+   * project's interviewers and anyone else who has logged contacts for it.
+   */
   async interviewerProgress(projectId: string, timeZone: string): Promise<InterviewerProgress[]> {
     const { rows } = await this.db.raw<{ rows: InterviewerProgress[] }>(
-      `SELECT u.id, u.name,
-              count(i.id) FILTER (WHERE ${counted('i')} AND i.field_day = (now() AT TIME ZONE ?)::date)::int AS "completesToday",
-              count(i.id) FILTER (WHERE ${counted('i')})::int AS "completesTotal",
-              count(i.id)::int AS "contactsTotal",
-              count(i.id) FILTER (WHERE i.over_quota)::int AS "overQuota"
+      `WITH c AS (SELECT * FROM interviewer_day_counts WHERE project_id = ?)
+       SELECT u.id, u.name,
+              coalesce(sum(c.n) FILTER (WHERE c.field_day = (now() AT TIME ZONE ?)::date), 0)::int AS "completesToday",
+              coalesce(sum(c.n), 0)::int AS "completesTotal",
+              coalesce(sum(c.contacts), 0)::int AS "contactsTotal",
+              coalesce(sum(c.over_quota), 0)::int AS "overQuota"
          FROM users u
-         LEFT JOIN interviews i ON i.interviewer_id = u.id AND i.project_id = ?
+         LEFT JOIN c ON c.interviewer_id = u.id
         WHERE u.id IN (SELECT user_id FROM project_members WHERE project_id = ?) AND u.role = 'interviewer'
-           OR u.id IN (SELECT interviewer_id FROM interviews WHERE project_id = ?)
+           OR u.id IN (SELECT interviewer_id FROM c)
         GROUP BY u.id ORDER BY u.name`,
-      [timeZone, projectId, projectId, projectId],
+      [projectId, timeZone, projectId],
     );
     return rows;
   }
