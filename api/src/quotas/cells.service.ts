@@ -9,6 +9,7 @@ import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
 import { loadVariableViews, type VariableView } from './cell-allocator.js';
 import { cellStatus, type CellStatus } from './cell-status.js';
+import { Coalescer } from './coalesce.js';
 
 export interface CellView {
   id: string;
@@ -30,6 +31,11 @@ export interface CellsView {
   refreshedAt: string;
 }
 
+export interface BoardCounts {
+  cells: CellView[];
+  interviewers: InterviewerProgress[];
+}
+
 export interface InterviewerProgress {
   id: string;
   name: string;
@@ -41,7 +47,17 @@ export interface InterviewerProgress {
 
 @Injectable()
 export class CellsService {
+  private readonly boards = new Coalescer<BoardCounts>();
+
   constructor(@Inject(KNEX) private readonly db: Knex) {}
+
+  /** The quota board's figures; supervisors polling one project at once share each read. */
+  board(projectId: string, timeZone: string): Promise<BoardCounts> {
+    return this.boards.run(`${projectId} ${timeZone}`, async () => {
+      const [cells, interviewers] = await Promise.all([this.cellCounts(projectId), this.interviewerProgress(projectId, timeZone)]);
+      return { cells, interviewers };
+    });
+  }
 
   async cellCounts(projectId: string, db: Knex = this.db): Promise<CellView[]> {
     const { rows } = await db.raw<{
@@ -84,18 +100,19 @@ export class CellsService {
    */
   async interviewerProgress(projectId: string, timeZone: string): Promise<InterviewerProgress[]> {
     const { rows } = await this.db.raw<{ rows: InterviewerProgress[] }>(
-      `WITH c AS (SELECT * FROM interviewer_day_counts WHERE project_id = ?)
-       SELECT u.id, u.name,
-              coalesce(sum(c.n) FILTER (WHERE c.field_day = (now() AT TIME ZONE ?)::date), 0)::int AS "completesToday",
-              coalesce(sum(c.n), 0)::int AS "completesTotal",
-              coalesce(sum(c.contacts), 0)::int AS "contactsTotal",
-              coalesce(sum(c.over_quota), 0)::int AS "overQuota"
+      `WITH c AS (
+         SELECT interviewer_id,
+                sum(n) FILTER (WHERE field_day = (now() AT TIME ZONE ?)::date) AS today,
+                sum(n) AS total, sum(contacts) AS contacts, sum(over_quota) AS over_quota
+           FROM interviewer_day_counts WHERE project_id = ? GROUP BY interviewer_id)
+       SELECT u.id, u.name, coalesce(c.today, 0)::int AS "completesToday", coalesce(c.total, 0)::int AS "completesTotal",
+              coalesce(c.contacts, 0)::int AS "contactsTotal", coalesce(c.over_quota, 0)::int AS "overQuota"
          FROM users u
          LEFT JOIN c ON c.interviewer_id = u.id
-        WHERE u.id IN (SELECT user_id FROM project_members WHERE project_id = ?) AND u.role = 'interviewer'
-           OR u.id IN (SELECT interviewer_id FROM c)
-        GROUP BY u.id ORDER BY u.name`,
-      [projectId, timeZone, projectId],
+        WHERE u.id IN (SELECT user_id FROM project_members WHERE project_id = ? UNION ALL SELECT interviewer_id FROM c)
+          AND (u.role = 'interviewer' OR c.interviewer_id IS NOT NULL)
+        ORDER BY u.name`,
+      [timeZone, projectId, projectId],
     );
     return rows;
   }
