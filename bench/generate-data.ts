@@ -6,8 +6,10 @@
  *
  *   npx tsx bench/generate-data.ts ROWS SEED DATA.csv TARGETS.csv
  */
+import { randomUUID } from 'node:crypto';
 import { writeFileSync } from 'node:fs';
-import { drawRespondent, seeded, VELLMOOR_TARGETS } from '../api/src/demo/vellmoor.js';
+import type { Disposition } from '../api/src/database/tables.js';
+import { draw, drawRespondent, seeded, VELLMOOR_TARGETS } from '../api/src/demo/vellmoor.js';
 
 export { VELLMOOR_TARGETS };
 
@@ -26,6 +28,39 @@ export function writeFiles(rows: number, seed: number, dataFile: string, targets
   writeFileSync(dataFile, `${[header.join(','), ...body].join('\n')}\n`);
   const targets = Object.entries(VELLMOOR_TARGETS).flatMap(([v, shares]) => Object.entries(shares).map(([c, s]) => `${v},${c},${s}`));
   writeFileSync(targetsFile, `${['variable,category,share', ...targets].join('\n')}\n`);
+}
+
+/** Contact outcomes of door-to-door fieldwork, in percent (invented, of a plausible size). */
+export const CONTACT_MIX = { complete: 25, partial: 4, refusal: 28, non_contact: 38, other: 3, not_eligible: 2 };
+
+export interface ContactPlan {
+  projectId: string;
+  interviewerIds: string[];
+  /** Field days (YYYY-MM-DD) to spread the contacts over. */
+  days: string[];
+  /** Category ids per variable name and label, as the targets endpoint returns them. */
+  categoryId: (variable: string, label: string) => string;
+}
+
+/** Rows for the interviews table: contacts of every outcome by many interviewers over many days. */
+export function contactRows(count: number, random: () => number, plan: ContactPlan) {
+  return Array.from({ length: count }, () => {
+    const r = drawRespondent(random);
+    const disposition = draw(random, CONTACT_MIX) as Disposition;
+    const complete = disposition === 'complete';
+    const day = plan.days[Math.floor(random() * plan.days.length)] as string;
+    return {
+      id: randomUUID(),
+      project_id: plan.projectId,
+      interviewer_id: plan.interviewerIds[Math.floor(random() * plan.interviewerIds.length)] as string,
+      disposition,
+      category_ids: complete ? Object.entries(r.categories).map(([v, label]) => plan.categoryId(v, label)) : [],
+      headline_answer: complete ? r.supports : null,
+      started_at: new Date(`${day}T10:00:00Z`),
+      ended_at: new Date(`${day}T10:15:00Z`),
+      field_day: day,
+    };
+  });
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) {

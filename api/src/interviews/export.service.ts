@@ -8,7 +8,6 @@ import type { Writable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { KNEX } from '../database/database.constants.js';
 import { loadActiveTargets } from '../quotas/cell-allocator.js';
-import { counted } from '../quotas/cells.service.js';
 
 @Injectable()
 export class ExportService {
@@ -19,8 +18,7 @@ export class ExportService {
     const labelOf = new Map<string, string>();
     for (const v of variables) for (const c of v.categories) labelOf.set(c.id, c.label);
     const rows = this.db('interviews')
-      .where({ project_id: projectId })
-      .whereRaw(counted())
+      .where({ project_id: projectId, counted: true })
       .orderBy(['field_day', 'ended_at', 'id'])
       .select('id', 'field_day', 'category_ids', 'headline_answer', 'over_quota', 'review_status')
       .stream();

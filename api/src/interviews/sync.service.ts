@@ -90,7 +90,7 @@ export class SyncService {
       );
       const cells = await this.cells.cellCounts(projectId, trx);
       const seen = new Set<string>();
-      const rows: Omit<InterviewRow, 'received_at' | 'review_status'>[] = [];
+      const rows: Omit<InterviewRow, 'received_at' | 'review_status' | 'counted'>[] = [];
 
       const out: SyncResult[] = checked.map((c) => {
         if (!c.ok) return { id: c.id, status: 'rejected', reason: c.reason };

@@ -1,11 +1,15 @@
 // Cell counts come from interview_counts (counted interviews per combination of
 // categories, kept by triggers) matched to cells, so the cost follows the number of cells.
+// Per-interviewer progress comes from interviewer_day_counts, so its cost follows
+// interviewers × field days. A counted interview is `interviews.counted` (migration
+// 20261202000700), the one definition the triggers use.
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
 import { loadVariableViews, type VariableView } from './cell-allocator.js';
 import { cellStatus, type CellStatus } from './cell-status.js';
+import { Coalescer } from './coalesce.js';
 
 export interface CellView {
   id: string;
@@ -27,6 +31,11 @@ export interface CellsView {
   refreshedAt: string;
 }
 
+export interface BoardCounts {
+  cells: CellView[];
+  interviewers: InterviewerProgress[];
+}
+
 export interface InterviewerProgress {
   id: string;
   name: string;
@@ -36,16 +45,19 @@ export interface InterviewerProgress {
   overQuota: number;
 }
 
-/**
- * SQL condition for interviews that count toward a cell: completes not rejected on review.
- * The triggers behind interview_counts (migration 20261202000400) apply the same rule.
- */
-export const counted = (alias = 'interviews') =>
-  `${alias}.disposition = 'complete' AND ${alias}.review_status <> 'rejected'`;
-
 @Injectable()
 export class CellsService {
+  private readonly boards = new Coalescer<BoardCounts>();
+
   constructor(@Inject(KNEX) private readonly db: Knex) {}
+
+  /** The quota board's figures; supervisors polling one project at once share each read. */
+  board(projectId: string, timeZone: string): Promise<BoardCounts> {
+    return this.boards.run(`${projectId} ${timeZone}`, async () => {
+      const [cells, interviewers] = await Promise.all([this.cellCounts(projectId), this.interviewerProgress(projectId, timeZone)]);
+      return { cells, interviewers };
+    });
+  }
 
   async cellCounts(projectId: string, db: Knex = this.db): Promise<CellView[]> {
     const { rows } = await db.raw<{
@@ -82,20 +94,25 @@ export class CellsService {
     };
   }
 
-  /** Completes per interviewer; "today" is today in the project's time zone. */
+  /**
+   * Completes per interviewer; "today" is today in the project's time zone. Lists the
+   * project's interviewers and anyone else who has logged contacts for it.
+   */
   async interviewerProgress(projectId: string, timeZone: string): Promise<InterviewerProgress[]> {
     const { rows } = await this.db.raw<{ rows: InterviewerProgress[] }>(
-      `SELECT u.id, u.name,
-              count(i.id) FILTER (WHERE ${counted('i')} AND i.field_day = (now() AT TIME ZONE ?)::date)::int AS "completesToday",
-              count(i.id) FILTER (WHERE ${counted('i')})::int AS "completesTotal",
-              count(i.id)::int AS "contactsTotal",
-              count(i.id) FILTER (WHERE i.over_quota)::int AS "overQuota"
+      `WITH c AS (
+         SELECT interviewer_id,
+                sum(n) FILTER (WHERE field_day = (now() AT TIME ZONE ?)::date) AS today,
+                sum(n) AS total, sum(contacts) AS contacts, sum(over_quota) AS over_quota
+           FROM interviewer_day_counts WHERE project_id = ? GROUP BY interviewer_id)
+       SELECT u.id, u.name, coalesce(c.today, 0)::int AS "completesToday", coalesce(c.total, 0)::int AS "completesTotal",
+              coalesce(c.contacts, 0)::int AS "contactsTotal", coalesce(c.over_quota, 0)::int AS "overQuota"
          FROM users u
-         LEFT JOIN interviews i ON i.interviewer_id = u.id AND i.project_id = ?
-        WHERE u.id IN (SELECT user_id FROM project_members WHERE project_id = ?) AND u.role = 'interviewer'
-           OR u.id IN (SELECT interviewer_id FROM interviews WHERE project_id = ?)
-        GROUP BY u.id ORDER BY u.name`,
-      [timeZone, projectId, projectId, projectId],
+         LEFT JOIN c ON c.interviewer_id = u.id
+        WHERE u.id IN (SELECT user_id FROM project_members WHERE project_id = ? UNION ALL SELECT interviewer_id FROM c)
+          AND (u.role = 'interviewer' OR c.interviewer_id IS NOT NULL)
+        ORDER BY u.name`,
+      [timeZone, projectId, projectId],
     );
     return rows;
   }

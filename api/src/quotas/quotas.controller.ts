@@ -60,10 +60,7 @@ export class QuotasController {
   @Roles('supervisor', 'lead', 'admin')
   async board(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string) {
     const project = await this.access.find(user, projectId);
-    const [cells, interviewers] = await Promise.all([
-      this.cells.cellCounts(projectId),
-      this.cells.interviewerProgress(projectId, project.time_zone),
-    ]);
+    const { cells, interviewers } = await this.cells.board(projectId, project.time_zone);
     return { projectId, targetSize: project.target_size, cells, interviewers, refreshedAt: new Date().toISOString() };
   }
 
