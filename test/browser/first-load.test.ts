@@ -41,7 +41,7 @@ describe("an interviewer's first visit", () => {
 
     const total = scripts.reduce((sum, s) => sum + s.bytes, 0);
     const report = { totalBytes: total, files: scripts.sort((a, b) => b.bytes - a.bytes) };
-    const out = resolve(import.meta.dirname, '../../.data/test-results');
+    const out = resolve(import.meta.dirname, '../../.data/measurements');
     mkdirSync(out, { recursive: true });
     writeFileSync(join(out, 'first-load-interviewer.json'), JSON.stringify(report, null, 2));
     console.log(`interviewer first visit: ${(total / 1024).toFixed(1)} KB of JavaScript in ${scripts.length} transfers`);
