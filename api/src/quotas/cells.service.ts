@@ -2,10 +2,10 @@
 // categories, kept by triggers) matched to cells, so the cost follows the number of cells.
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Knex } from 'knex';
+import { cellStatus, type CellStatus } from '@plumbline/cell-rules';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
 import { loadVariableViews, type VariableView } from './cell-allocator.js';
-import { cellStatus, type CellStatus } from './cell-status.js';
 
 export interface CellView {
   id: string;
