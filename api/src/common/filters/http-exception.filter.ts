@@ -26,7 +26,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
       this.logger.warn(`database unavailable: ${(exception as Error).message}`);
       const status = HttpStatus.SERVICE_UNAVAILABLE;
       res.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
-      res.status(status).json(errorBody(status, 'The database cannot be reached just now; nothing was changed. Try again in a few seconds.'));
+      res.status(status).json(errorBody(status, 'The database cannot be reached just now; try again in a few seconds.'));
       return;
     }
     if (exception instanceof HttpException) {
