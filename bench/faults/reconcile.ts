@@ -46,6 +46,9 @@ export async function reconcile({ db, projectId, sent, devices, ledger, board, b
   if (summary.unexpected) problems.push(`${summary.unexpected} stored interviews nobody sent`);
   if (summary.stillInAnOutbox) problems.push(`${summary.stillInAnOutbox} interviews never acknowledged`);
   if (summary.rejected) problems.push(`${summary.rejected} interviews rejected: ${[...ledger.rejected.values()][0]}`);
+  // During an outage the API answers 503 or nothing at all: a 401 or a 500 is a finding.
+  const other = Object.entries(ledger.failures).filter(([kind]) => kind !== '503' && !kind.startsWith('no answer'));
+  if (other.length) problems.push(`unexpected answers during the faults: ${other.map(([k, n]) => `${k} × ${n}`).join(', ')}`);
   const completes = [summary.sentCompletes, summary.countedCompletes, summary.boardCompletes, summary.boardInterlockedCells, summary.balanceN];
   if (new Set(completes).size !== 1) problems.push(`completes disagree (sent, count(*), board, board cells, balance): ${completes.join(', ')}`);
   return { summary, problems };
