@@ -69,6 +69,7 @@ async function main(): Promise<void> {
     const board = await call(api.base, `/api/projects/${field.projectId}/quota-board`, supervisor);
     const balance = await call(api.base, `/api/projects/${field.projectId}/balance`, lead);
     const report = await reconcile({ db, projectId: field.projectId, sent, devices, ledger, board, balance });
+    if (struck.length < PLAN.length) report.problems.push(`only ${struck.length} of ${PLAN.length} faults struck before the devices finished`);
     console.log(JSON.stringify({ devices: devices.length, batchSize: 1000, seconds: Number(seconds.toFixed(1)), requests: ledger.requests, failedRequests: ledger.failures, faults: struck, ...report }, null, 2));
     const r = report.summary;
     console.log(
