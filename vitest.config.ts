@@ -14,7 +14,7 @@ export default defineConfig({
         ...nestTransform,
         test: {
           name: 'api-unit',
-          include: ['api/src/**/*.spec.ts'],
+          include: ['api/src/**/*.spec.ts', 'packages/*/**/*.spec.ts'],
           environment: 'node',
         },
       },

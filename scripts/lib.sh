@@ -149,7 +149,11 @@ build_if_stale() {
   fi
 }
 
+build_api() {
+  build_if_stale api "$ROOT/api/dist/.stamp" "$ROOT/api/src" "$ROOT/api/tsconfig.json" "$ROOT/api/tsconfig.build.json" "$ROOT/packages" "$ROOT/package-lock.json"
+}
+
 build_all() {
-  build_if_stale api "$ROOT/api/dist/.stamp" "$ROOT/api/src" "$ROOT/api/tsconfig.json" "$ROOT/api/tsconfig.build.json" "$ROOT/package-lock.json"
-  build_if_stale pwa "$ROOT/pwa/dist/.stamp" "$ROOT/pwa/src" "$ROOT/pwa/index.html" "$ROOT/pwa/vite.config.ts" "$ROOT/pwa/public" "$ROOT/fonts" "$ROOT/package-lock.json"
+  build_api
+  build_if_stale pwa "$ROOT/pwa/dist/.stamp" "$ROOT/pwa/src" "$ROOT/pwa/index.html" "$ROOT/pwa/vite.config.ts" "$ROOT/pwa/public" "$ROOT/fonts" "$ROOT/packages" "$ROOT/package-lock.json"
 }

@@ -15,7 +15,7 @@ export class HealthController {
     try {
       await this.db.raw('select 1');
     } catch {
-      throw new ServiceUnavailableException('The database is not reachable');
+      throw new ServiceUnavailableException('The database is down: the API is running but cannot reach PostgreSQL');
     }
     return { status: 'ok', database: 'up' };
   }

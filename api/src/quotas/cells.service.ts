@@ -5,10 +5,10 @@
 // 20261202000700), the one definition the triggers use.
 import { Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Knex } from 'knex';
+import { cellStatus, type CellStatus } from '@plumbline/cell-rules';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
 import { loadVariableViews, type VariableView } from './cell-allocator.js';
-import { cellStatus, type CellStatus } from './cell-status.js';
 import { Coalescer } from './coalesce.js';
 
 export interface CellView {

@@ -1,6 +1,7 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { Response } from 'express';
 import { STATUS_CODES } from 'node:http';
+import { isDatabaseUnavailable, RETRY_AFTER_SECONDS } from '../database-unavailable.js';
 
 /** The one error shape every route answers with. */
 export interface ErrorBody {
@@ -20,6 +21,14 @@ export class AllExceptionsFilter implements ExceptionFilter {
 
   catch(exception: unknown, host: ArgumentsHost): void {
     const res = host.switchToHttp().getResponse<Response>();
+    if (isDatabaseUnavailable(exception)) {
+      // An outage, not a fault of the request: the device keeps its session and outbox and retries.
+      this.logger.warn(`database unavailable: ${(exception as Error).message}`);
+      const status = HttpStatus.SERVICE_UNAVAILABLE;
+      res.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
+      res.status(status).json(errorBody(status, 'The database cannot be reached just now; try again in a few seconds.'));
+      return;
+    }
     if (exception instanceof HttpException) {
       const status = exception.getStatus();
       const payload = exception.getResponse();
@@ -31,6 +40,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
         else if (Array.isArray(p.message)) message = p.message.join('; ');
         fields = p.fields;
       }
+      if (status === HttpStatus.SERVICE_UNAVAILABLE) res.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
       res.status(status).json(errorBody(status, message, fields));
       return;
     }

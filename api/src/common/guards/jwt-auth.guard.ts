@@ -1,4 +1,4 @@
-import { ExecutionContext, Injectable, UnauthorizedException } from '@nestjs/common';
+import { ExecutionContext, HttpException, Injectable, UnauthorizedException } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { AuthGuard } from '@nestjs/passport';
 import { IS_PUBLIC } from '../decorators/public.decorator.js';
@@ -16,6 +16,9 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
   }
 
   override handleRequest<T>(err: unknown, user: T, info: unknown): T {
+    // The user look-up failed for another reason than the token (the database is down):
+    // let the error filter answer for it rather than call the token invalid.
+    if (err && !(err instanceof HttpException)) throw err;
     if (err || !user) {
       const reason = info instanceof Error ? info.message : '';
       if (reason === 'jwt expired') throw new UnauthorizedException('Your sign-in has expired; refresh it or sign in again');

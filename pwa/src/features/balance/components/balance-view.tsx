@@ -25,13 +25,16 @@ export function BalanceView({ projectId, targetSize }: BalanceViewProps) {
       isEmpty={() => false}
       empty={null}
     >
-      {(data) => <BalanceContent balance={data} targetSize={targetSize} />}
+      {(data) => <BalanceContent balance={data} targetSize={targetSize} checkedAt={balance.dataUpdatedAt} />}
     </QueryView>
   );
 }
 
-function BalanceContent({ balance, targetSize }: { balance: Balance; targetSize: number }) {
+// "Updated" is when this screen last heard from the server (a 304 included), not the
+// server's clock in the body: on a 304 the browser hands back the stored body unchanged.
+function BalanceContent({ balance, targetSize, checkedAt }: { balance: Balance; targetSize: number; checkedAt: number }) {
   const online = useOnline();
+  const checked = formatClock(new Date(checkedAt).toISOString());
   return (
     <>
       <div className="pl-board-head">
@@ -40,7 +43,7 @@ function BalanceContent({ balance, targetSize }: { balance: Balance; targetSize:
           completes counted
         </p>
         <p className="pl-small pl-muted" role="status">
-          {online ? `Updated ${formatClock(balance.computedAt)}` : `Offline: as of ${formatClock(balance.computedAt)}`}
+          {online ? `Updated ${checked}` : `Offline: as of ${checked}`}
         </p>
       </div>
       {balance.weightingProblem ? (

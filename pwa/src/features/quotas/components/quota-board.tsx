@@ -30,12 +30,14 @@ export function QuotaBoard({ projectId }: { projectId: string }) {
         </EmptyPanel>
       }
     >
-      {(data) => <BoardContent board={data} projectId={projectId} refreshing={board.isFetching} />}
+      {(data) => <BoardContent board={data} projectId={projectId} refreshing={board.isFetching} checkedAt={board.dataUpdatedAt} />}
     </QueryView>
   );
 }
 
-function BoardContent({ board, projectId, refreshing }: { board: Board; projectId: string; refreshing: boolean }) {
+// "Updated" is when this screen last heard from the server (a 304 included), not the
+// server's clock in the body: on a 304 the browser hands back the stored body unchanged.
+function BoardContent({ board, projectId, refreshing, checkedAt }: { board: Board; projectId: string; refreshing: boolean; checkedAt: number }) {
   const wide = useWideScreen();
   const online = useOnline();
   const [view, setView] = useState<BoardView>(initialView);
@@ -44,6 +46,7 @@ function BoardContent({ board, projectId, refreshing }: { board: Board; projectI
   const reopen = useReopenCell(projectId);
   const change = asking?.status === 'closed' ? reopen : close;
 
+  const checked = formatClock(new Date(checkedAt).toISOString());
   const cells = visibleCells(board.cells, view);
   const completes = board.interviewers.reduce((sum, person) => sum + person.completesTotal, 0);
   const ask = (cell: Cell) => {
@@ -63,7 +66,7 @@ function BoardContent({ board, projectId, refreshing }: { board: Board; projectI
           <span className="pl-figure">{formatCount(completes)}</span> of <span className="pl-figure">{formatCount(board.targetSize)}</span> completes
         </p>
         <p className="pl-small pl-muted" role="status">
-          {online ? `Updated ${formatClock(board.refreshedAt)}` : `Offline: as of ${formatClock(board.refreshedAt)}`}
+          {online ? `Updated ${checked}` : `Offline: as of ${checked}`}
           {refreshing ? ' · refreshing…' : ''}
         </p>
       </div>
