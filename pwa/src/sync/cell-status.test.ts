@@ -1,20 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { completeEntry, tramCells } from '../test/field-fixtures';
-import { blockingCells, cellStatus, respondentCells, waitingCompletes, withUnsent } from './cell-status';
+import { blockingCells, respondentCells, waitingCompletes, withUnsent } from './cell-status';
 
 const young = { 'v-age': 'c-young', 'v-region': 'c-mardon' };
 const old = { 'v-age': 'c-old', 'v-region': 'c-quay' };
 
 describe('cell status on the device', () => {
-  // The rule mirrors the server's (api/src/quotas/cell-status.ts), itself a field rule of thumb.
-  it('calls a cell nearly full when a tenth of its target or less remains, full at the target, closed when closed', () => {
-    expect(cellStatus(50, 44, false)).toBe('open');
-    expect(cellStatus(50, 45, false)).toBe('nearly_full');
-    expect(cellStatus(50, 50, false)).toBe('full');
-    expect(cellStatus(50, 12, true)).toBe('closed');
-    expect(cellStatus(3, 2, false)).toBe('nearly_full');
-  });
-
   it('adds this device’s unsent completes to the synced counts', () => {
     const unsent = waitingCompletes([completeEntry(1, 'me', young), completeEntry(2, 'me', old), completeEntry(3, 'me', old)]);
     const cells = withUnsent(tramCells, unsent);

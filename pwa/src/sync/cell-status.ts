@@ -1,23 +1,12 @@
 // Cell status as this device knows it: the counts from the last sync plus this interviewer's
 // own contacts still in the outbox. Pure functions, so the screens and tests share them.
-import type { CellStatus, InterviewRecord, OutboxEntry, QuotaCell } from '../db/plumbline-db';
+import { cellStatus } from '@plumbline/cell-rules';
+import type { InterviewRecord, OutboxEntry, QuotaCell } from '../db/plumbline-db';
 import { isRejected } from '../db/outbox-store';
 
 export interface LocalCell extends QuotaCell {
   /** Completes in this cell still waiting on this device. */
   unsent: number;
-}
-
-/**
- * The server's rule (api/src/quotas/cell-status.ts): closed by a supervisor wins; full when
- * nothing remains; nearly full when at most a tenth of the target (at least one) remains.
- */
-export function cellStatus(target: number, achieved: number, closed: boolean): CellStatus {
-  if (closed) return 'closed';
-  const remaining = target - achieved;
-  if (remaining <= 0) return 'full';
-  if (remaining <= Math.max(1, Math.ceil(target * 0.1))) return 'nearly_full';
-  return 'open';
 }
 
 /** The waiting (not refused) completes among outbox entries, as records. */

@@ -145,7 +145,8 @@ async function refreshCaches(userId: string): Promise<void> {
     await saveProjects(userId, projects);
     for (const project of projects) {
       const cells = await getProjectCells(project.id);
-      await saveCells(project.id, cells.cells, cells.refreshedAt, cells.variables);
+      // When this device heard, not the server's clock in the body: after a 304 the browser hands back the stored body.
+      await saveCells(project.id, cells.cells, new Date().toISOString(), cells.variables);
     }
   } catch (error) {
     if (error instanceof Stop) throw error;
