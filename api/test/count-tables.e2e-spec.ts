@@ -57,9 +57,12 @@ async function chosen(s: { every: number; at: number }): Promise<string[]> {
 
 type Operation = typeof operation extends fc.Arbitrary<infer T> ? T : never;
 
+let inserted = 0;
+
 async function run(ops: Operation[]) {
   for (const op of ops) {
     if (op.kind === 'insert') {
+      inserted += op.rows.length;
       await h.db('interviews').insert(
         op.rows.map((r) => ({
           id: randomUUID(),
@@ -112,7 +115,8 @@ describe('count tables', () => {
       }),
       { numRuns: 40 },
     );
-    expect(Number((await h.db('interviews').whereIn('project_id', projects).count({ n: '*' }))[0]!.n)).toBeGreaterThan(0);
+    // The runs really stored interviews (the last one may have deleted them all again).
+    expect(inserted).toBeGreaterThan(0);
   });
 
   it('follow a whole project re-dated at once, as a time zone change does', async () => {

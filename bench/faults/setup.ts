@@ -3,6 +3,7 @@
 // from the same backup), so the two outboxes share part of their interviews' ids.
 import { randomUUID } from 'node:crypto';
 import type { Knex } from 'knex';
+import type { Role } from '../../api/src/common/roles.js';
 import { hashPassword } from '../../api/src/auth/password.js';
 import { drawRespondent, seeded, VELLMOOR_TARGETS } from '../../api/src/demo/vellmoor.js';
 import type { Interview } from './device.js';
@@ -18,15 +19,17 @@ export interface Fieldwork {
 
 export async function seedFieldwork(db: Knex, interviewers: number): Promise<Fieldwork> {
   const hash = await hashPassword(PASSWORD);
-  const [org] = await db('organisations').insert({ name: 'Fault suite agency' }).returning('*');
-  const user = (role: string, email: string) => ({ organisation_id: org.id, email, name: email, role, password_hash: hash });
+  const org = (await db('organisations').insert({ name: 'Fault suite agency' }).returning('*'))[0]!;
+  const user = (role: Role, email: string) => ({ organisation_id: org.id, email, name: email, role, password_hash: hash });
   const emails = Array.from({ length: interviewers }, (_, i) => `int${i + 1}@faults.example`);
   const rows = await db('users')
     .insert([user('lead', 'lead@faults.example'), user('supervisor', 'sup@faults.example'), ...emails.map((e) => user('interviewer', e))])
     .returning('*');
-  const [project] = await db('projects')
-    .insert({ organisation_id: org.id, name: 'Faults', target_size: 100_000, headline_question: 'Support?', status: 'fieldwork' })
-    .returning('*');
+  const project = (
+    await db('projects')
+      .insert({ organisation_id: org.id, name: 'Faults', target_size: 100_000, headline_question: 'Support?', status: 'fieldwork' })
+      .returning('*')
+  )[0]!;
   await db('project_members').insert(rows.filter((r) => r.role === 'interviewer').map((r) => ({ project_id: project.id, user_id: r.id })));
   return { projectId: project.id, lead: 'lead@faults.example', supervisor: 'sup@faults.example', interviewers: emails };
 }
