@@ -3,7 +3,7 @@ import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import { VitePWA } from 'vite-plugin-pwa';
 import { compression } from 'vite-plugin-compression2';
-import { shellOnly } from './scripts/shell-only';
+import { shellOnly } from './scripts/shell-only.ts';
 
 const pwaRoot = fileURLToPath(new URL('.', import.meta.url));
 const fontsDir = fileURLToPath(new URL('../fonts', import.meta.url));
