@@ -20,6 +20,7 @@ export interface CheckedItem {
 
 export type ItemCheck = { ok: true; item: CheckedItem } | { ok: false; id: string | null; reason: string };
 
+// Any 128-bit value in the hyphenated hex form, as PostgreSQL's uuid type reads it.
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 /** The nil and max UUIDs (RFC 9562, sections 5.9 and 5.10): placeholders, never a device's own id. */
 const PLACEHOLDERS = new Set(['00000000-0000-0000-0000-000000000000', 'ffffffff-ffff-ffff-ffff-ffffffffffff']);
@@ -77,7 +78,8 @@ export function checkItem(raw: unknown): ItemCheck {
     const dto = plainToInstance(InterviewItemDto, raw);
     const errors = validateSync(dto, { whitelist: true, forbidNonWhitelisted: true });
     if (errors.length) return { ok: false, id, reason: reasonsOf(errors) };
-    const canonical = canonicalUuid(dto.id) as string;
+    const canonical = canonicalUuid(dto.id);
+    if (!canonical) return { ok: false, id, reason: 'id must be a UUID' };
     if (PLACEHOLDERS.has(canonical)) return { ok: false, id, reason: 'id is a placeholder UUID, not one made for this interview' };
     const started = parseMoment('startedAt', dto.startedAt);
     if (!started.ok) return { ok: false, id, reason: started.reason };

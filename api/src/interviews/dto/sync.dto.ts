@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsString, IsObject, IsOptional, IsUUID } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsString, IsObject, IsOptional } from 'class-validator';
 import { DISPOSITIONS, type Disposition } from '../../database/tables.js';
 
 export const SYNC_BATCH_LIMIT = 1000;
@@ -14,7 +14,7 @@ export class SyncBatchDto {
 
 export class InterviewItemDto {
   @ApiProperty({ description: 'UUID made on the device when the contact was logged; compared case-insensitively' })
-  @IsUUID('all', { message: 'id must be a UUID' })
+  @IsString({ message: 'id must be a UUID' })
   id: string;
 
   @ApiProperty({ enum: DISPOSITIONS })
@@ -37,6 +37,6 @@ export class InterviewItemDto {
   startedAt: string;
 
   @ApiProperty({ example: '2026-11-20T10:19:00Z', description: 'RFC 3339 date and time with Z or an offset' })
-  @IsString({ message: 'endedAt must be a date and time such as 2026-11-20T10:19:00Z' })
+  @IsString({ message: 'endedAt must be a date and time such as 2026-11-20T10:02:00Z' })
   endedAt: string;
 }
