@@ -46,7 +46,7 @@ function validItem([a, s, r, answer, disposition]: [number, number, number, bool
   return { id: randomUUID(), disposition, categories, headlineAnswer: answer, startedAt: '2026-11-20T10:00:00Z', endedAt: '2026-11-20T10:12:30.5Z' };
 }
 
-function mutate(item: Record<string, unknown>, m: fc.RecordValue<{ field: (typeof FIELDS)[number]; value: unknown; variable: number }>): unknown {
+function mutate(item: Record<string, unknown>, m: { field: (typeof FIELDS)[number]; value: unknown; variable: number }): unknown {
   switch (m.field) {
     case 'whole': return m.value;
     case 'extra': return { ...item, note: m.value };

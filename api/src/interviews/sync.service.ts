@@ -124,7 +124,9 @@ export class SyncService {
     const { stored, refused } = await insertGuarded(trx, rows);
     const missing = rows.filter((r) => !stored.has(r.id) && !refused.has(r.id)).map((r) => r.id);
     // Ids another batch stored after our look-up (another project's batch is not serialised with ours).
-    const takenMeanwhile = new Map((await trx('interviews').whereIn('id', missing).select('id', 'project_id', 'interviewer_id')).map((r) => [r.id, r]));
+    const takenMeanwhile = new Map(
+      missing.length ? (await trx('interviews').whereIn('id', missing).select('id', 'project_id', 'interviewer_id')).map((r) => [r.id, r]) : [],
+    );
     out.forEach((result, index) => {
       if (result.status !== 'accepted' || !result.id || stored.has(result.id)) return;
       const taken = takenMeanwhile.get(result.id);
