@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { canonicalUuid, checkCategories, checkItem, parseMoment, type CheckedItem } from './item-check.js';
@@ -22,6 +23,18 @@ describe('reading a device’s date and time', () => {
     expect(parseMoment('endedAt', '2026-11-20T11:15:00.5+01:00')).toEqual({ ok: true, at: new Date(Date.UTC(2026, 10, 20, 10, 15, 0, 500)) });
     expect(parseMoment('endedAt', '2026-11-20T05:45:00.123456789-04:30')).toEqual({ ok: true, at: new Date(Date.UTC(2026, 10, 20, 10, 15, 0, 123)) });
     expect(parseMoment('endedAt', '2026-02-28t23:59:59z')).toEqual({ ok: true, at: new Date(Date.UTC(2026, 1, 28, 23, 59, 59)) });
+  });
+
+  it('reads back every moment a device writes with toISOString, in any offset', () => {
+    fc.assert(
+      fc.property(fc.date({ min: new Date('2000-01-02T00:00:00Z'), max: new Date('2099-12-30T00:00:00Z'), noInvalidDate: true }), fc.integer({ min: -14 * 60, max: 14 * 60 }), (at, offset) => {
+        expect(parseMoment('endedAt', at.toISOString())).toEqual({ ok: true, at });
+        const local = new Date(at.getTime() + offset * 60_000).toISOString().slice(0, -1);
+        const sign = offset < 0 ? '-' : '+';
+        const hhmm = `${String(Math.floor(Math.abs(offset) / 60)).padStart(2, '0')}:${String(Math.abs(offset) % 60).padStart(2, '0')}`;
+        expect(parseMoment('endedAt', `${local}${sign}${hhmm}`)).toEqual({ ok: true, at });
+      }),
+    );
   });
 
   it.each<[unknown, string]>([
@@ -82,6 +95,22 @@ describe('one item on its own', () => {
     expect(reasonOf({ ...valid(), endedAt: '2026-11-20T09:00:00Z' })).toBe('endedAt is before startedAt');
     expect(reasonOf({ ...valid(), startedAt: '2026-W47-5' })).toBe('startedAt must be a date and time such as 2026-11-20T10:02:00Z');
     expect(reasonOf({ ...valid(), categories: { A: 'x', a: 'y' } })).toBe('names one quota variable twice');
+  });
+});
+
+describe('anything at all', () => {
+  it('is answered with an interview or a reason in words, never an exception or a raw id', () => {
+    const uuid = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
+    fc.assert(
+      fc.property(fc.oneof(fc.anything(), fc.record({ id: fc.uuid(), disposition: fc.anything(), startedAt: fc.anything(), endedAt: fc.anything(), categories: fc.anything() })), (raw) => {
+        const result = checkItem(raw);
+        if (!result.ok) {
+          expect(result.reason).toMatch(/^[\w ,;:'.()-]+$/);
+          expect(result.reason).not.toMatch(uuid);
+        }
+      }),
+      { numRuns: 500 },
+    );
   });
 });
 

@@ -59,11 +59,14 @@ export function parseMoment(field: string, value: unknown): Moment {
   return { ok: true, at: new Date(local.getTime() - sign * (offsetHours * 60 + offsetMinutes) * 60_000) };
 }
 
+/** Unknown fields are named in the reason only when the name reads as a field name. */
+const FIELD_NAME = /^[A-Za-z][A-Za-z0-9_]{0,39}$/;
+
 function reasonsOf(errors: ValidationError[]): string {
   return errors
     .flatMap((e) =>
       Object.entries(e.constraints ?? {}).map(([kind, message]) =>
-        kind === 'whitelistValidation' ? `${e.property} is not part of an interview` : message,
+        kind === 'whitelistValidation' ? `${FIELD_NAME.test(e.property) ? e.property : 'a field'} is not part of an interview` : message,
       ),
     )
     .join('; ');
