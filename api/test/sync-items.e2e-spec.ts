@@ -138,6 +138,31 @@ describe('ids compared as UUIDs', () => {
     expect(await h.db('interviews').where({ id: item.id }).select('project_id')).toEqual([{ project_id: org.projectId }]);
   });
 
+  it('never answers accepted twice when batches for two projects race with the same ids', async () => {
+    const [second] = await h.db('projects').insert({ organisation_id: org.id, name: 'Racing project', target_size: 10 }).returning('id');
+    await h.db('project_members').insert({ project_id: second!.id, user_id: org.users.interviewer.id });
+    const refusals = Array.from({ length: 20 }, () => ({ id: randomUUID(), disposition: 'refusal', startedAt: '2026-11-20T11:00:00Z', endedAt: '2026-11-20T11:01:00Z' }));
+    // Hold back every insert until both batches have looked for their ids and found none,
+    // so both reach the insert: the race that the project lock does not cover.
+    const gate = await h.db.transaction();
+    await gate.raw('LOCK TABLE interviews IN SHARE ROW EXCLUSIVE MODE');
+    const racing = Promise.all([
+      interviewer.post(syncPath, { interviews: refusals }),
+      interviewer.post(`/api/projects/${second!.id}/interviews/sync`, { interviews: refusals.map((r) => ({ ...r, id: r.id.toUpperCase() })) }),
+    ]);
+    const waiting = async () =>
+      Number((await h.db.raw(`SELECT count(*) AS n FROM pg_locks WHERE NOT granted AND relation = 'interviews'::regclass`)).rows[0].n);
+    for (let i = 0; i < 200 && (await waiting()) < 2; i++) await new Promise((r) => setTimeout(r, 25));
+    expect(await waiting()).toBe(2);
+    await gate.commit();
+    const [a, b] = await racing;
+    const stored = new Map((await h.db('interviews').whereIn('id', refusals.map((r) => r.id)).select('id', 'project_id')).map((r) => [r.id, r.project_id]));
+    for (const [index, item] of refusals.entries()) {
+      expect([a.body.results[index].status, b.body.results[index].status].sort()).toEqual(['accepted', 'rejected']);
+      expect(stored.get(item.id)).toBe(a.body.results[index].status === 'accepted' ? org.projectId : second!.id);
+    }
+  });
+
   it('stores an id repeated inside one batch once: the same interview again is duplicate, a different one rejected', async () => {
     const item = complete(someone());
     const other = { ...complete(pick(targets, { age: '18-34', sex: 'female', region: 'North' })), id: item.id.toUpperCase() };
