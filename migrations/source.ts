@@ -7,6 +7,7 @@ import * as m0002 from './20261202000200_projects.js';
 import * as m0003 from './20261202000300_sign_in_throttle.js';
 import * as m0004 from './20261202000400_quotas_and_interviews.js';
 import * as m0005 from './20261202000500_project_time_zone.js';
+import * as m0006 from './20261202000600_interview_flags.js';
 import * as m0007 from './20261202000700_interview_count_tables.js';
 
 const migrations: Record<string, Knex.Migration> = {
@@ -15,6 +16,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202000300_sign_in_throttle': m0003,
   '20261202000400_quotas_and_interviews': m0004,
   '20261202000500_project_time_zone': m0005,
+  '20261202000600_interview_flags': m0006,
   '20261202000700_interview_count_tables': m0007,
 };
 

@@ -86,7 +86,7 @@ describe('interview sync', () => {
     expect(byId[2].reason).toBe('region: no category given');
     expect(byId[3].reason).toBe('headlineAnswer is missing');
     expect(byId[4].reason).toBe('id must be a UUID');
-    expect(byId[5].reason).toBe('property respondentName should not exist');
+    expect(byId[5].reason).toBe('respondentName is not part of an interview');
     expect(byId[6].reason).toBe('endedAt is before startedAt');
     expect(await rowCount([good.id, refusal.id, unknownCategory.id, extra.id])).toBe(2);
   });

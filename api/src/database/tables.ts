@@ -99,6 +99,8 @@ export interface InterviewRow {
    * counted interview (migration 20261202000700); the count tables and queries use it.
    */
   counted: boolean;
+  /** Codes of the flags set on arrival (api/src/interviews/flags.ts); over quota is its own column. */
+  flags: string[];
 }
 
 export interface ProjectMemberRow {

@@ -1,6 +1,7 @@
 // Streams a project's counted completes as CSV, one row per interview, with one column
-// per current quota variable and the headline answer as 0/1. Respondents appear only
-// through their categories and answer.
+// per current quota variable, the headline answer as 0/1 and the interview's flag codes
+// (separated by ";", empty when none). Respondents appear only through their categories
+// and answer.
 import { Inject, Injectable } from '@nestjs/common';
 import { stringify } from 'csv-stringify';
 import type { Knex } from 'knex';
@@ -20,17 +21,17 @@ export class ExportService {
     const rows = this.db('interviews')
       .where({ project_id: projectId, counted: true })
       .orderBy(['field_day', 'ended_at', 'id'])
-      .select('id', 'field_day', 'category_ids', 'headline_answer', 'over_quota', 'review_status')
+      .select('id', 'field_day', 'category_ids', 'headline_answer', 'over_quota', 'review_status', 'flags')
       .stream();
     const csv = stringify({
       header: true,
-      columns: ['interview_id', 'field_day', ...variables.map((v) => v.name), 'headline', 'over_quota', 'review_status'],
+      columns: ['interview_id', 'field_day', ...variables.map((v) => v.name), 'headline', 'over_quota', 'review_status', 'flags'],
       cast: { boolean: (value) => (value ? '1' : '0') },
     });
-    const toRecord = async function* (source: AsyncIterable<{ id: string; field_day: string; category_ids: string[]; headline_answer: boolean; over_quota: boolean; review_status: string }>) {
+    const toRecord = async function* (source: AsyncIterable<{ id: string; field_day: string; category_ids: string[]; headline_answer: boolean; over_quota: boolean; review_status: string; flags: string[] }>) {
       for await (const r of source) {
         const byVariable = variables.map((v) => v.categories.find((c) => r.category_ids.includes(c.id))?.label ?? '');
-        yield [r.id, r.field_day, ...byVariable, r.headline_answer, r.over_quota, r.review_status];
+        yield [r.id, r.field_day, ...byVariable, r.headline_answer, r.over_quota, r.review_status, r.flags.join(';')];
       }
     };
     await pipeline(rows, toRecord, csv, out);

@@ -7,6 +7,7 @@ import type { AuthUser } from '../common/roles.js';
 import { SyncBatchDto } from './dto/sync.dto.js';
 import { ProjectAccess } from '../projects/project-access.service.js';
 import { ExportService } from './export.service.js';
+import { FlagCountsService } from './flag-counts.service.js';
 import { SyncService } from './sync.service.js';
 
 @ApiTags('interviews')
@@ -17,6 +18,7 @@ export class InterviewsController {
     private readonly syncService: SyncService,
     private readonly exportService: ExportService,
     private readonly access: ProjectAccess,
+    private readonly flagCounts: FlagCountsService,
   ) {}
 
   /** Idempotent upload: each interview is answered accepted, duplicate or rejected with a reason. */
@@ -25,6 +27,14 @@ export class InterviewsController {
   @Roles('interviewer')
   sync(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Body() dto: SyncBatchDto) {
     return this.syncService.sync(user, projectId, dto.interviews);
+  }
+
+  /** Kept-and-flagged interviews counted by reason, for the quota board. */
+  @Get('flags')
+  @Roles('supervisor', 'lead', 'admin')
+  async flags(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string) {
+    await this.access.find(user, projectId);
+    return this.flagCounts.counts(projectId);
   }
 
   /** Counted completes as CSV, one row per interview (for weighting elsewhere or checking). */

@@ -3,7 +3,8 @@ import { ProjectsModule } from '../projects/projects.module.js';
 import { QuotasModule } from '../quotas/quotas.module.js';
 import { InterviewsController } from './interviews.controller.js';
 import { ExportService } from './export.service.js';
+import { FlagCountsService } from './flag-counts.service.js';
 import { SyncService } from './sync.service.js';
 
-@Module({ imports: [ProjectsModule, QuotasModule], controllers: [InterviewsController], providers: [SyncService, ExportService] })
+@Module({ imports: [ProjectsModule, QuotasModule], controllers: [InterviewsController], providers: [SyncService, ExportService, FlagCountsService] })
 export class InterviewsModule {}

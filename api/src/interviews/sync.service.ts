@@ -1,25 +1,30 @@
-// Receives batches of interviews from devices. The device's UUID is the row's key, so a
-// batch sent twice, or two devices racing, store each interview once: later copies are
-// answered "duplicate". Batches for one project are serialised by a row lock on the
-// project, so over-quota marking sees every earlier interview.
+// Receives batches of interviews from devices. The device's UUID (compared in lower case)
+// is the row's key, so a batch sent twice, or two devices racing, store each interview
+// once: later copies from the same interviewer are answered "duplicate", an id held by
+// another interviewer or project "rejected", never a false "accepted". Each item is checked
+// on its own (item-check.ts) and stored through a guarded insert, so one bad item is only
+// that item's rejection. Batches for one project are serialised by a row lock on the
+// project, so over-quota marking sees every earlier interview. Interviews the project did
+// not expect (closed project, outside the field dates) are kept and flagged (flags.ts).
 import { Inject, Injectable } from '@nestjs/common';
-import { plainToInstance } from 'class-transformer';
-import { validateSync } from 'class-validator';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
-import type { InterviewRow } from '../database/tables.js';
+import type { ProjectRow } from '../database/tables.js';
 import { ProjectAccess } from '../projects/project-access.service.js';
-import { loadActiveTargets, type ActiveTargets } from '../quotas/cell-allocator.js';
+import { loadActiveTargets } from '../quotas/cell-allocator.js';
 import { CellsService, type CellView } from '../quotas/cells.service.js';
-import { InterviewItemDto } from './dto/sync.dto.js';
+import { flagsOnArrival, type FlagCode } from './flags.js';
+import { insertGuarded, type NewInterview } from './guarded-insert.js';
+import { checkCategories, checkItem, type CheckedItem } from './item-check.js';
 
 export type SyncResult =
-  | { id: string | null; status: 'accepted'; overQuota: boolean }
+  | { id: string | null; status: 'accepted'; overQuota: boolean; flags: FlagCode[] }
   | { id: string | null; status: 'duplicate' }
   | { id: string | null; status: 'rejected'; reason: string };
 
 export interface SyncReply {
+  /** One result per item, in the order sent; ids in canonical lower case. */
   results: SyncResult[];
   accepted: number;
   duplicates: number;
@@ -28,45 +33,17 @@ export interface SyncReply {
 }
 
 /** The calendar day (YYYY-MM-DD) of a moment in the project's time zone. */
-export function fieldDayIn(timeZone: string): (moment: string) => string {
+export function fieldDayIn(timeZone: string): (moment: Date | string) => string {
   const format = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' });
-  return (moment) => format.format(new Date(moment));
+  return (moment) => format.format(typeof moment === 'string' ? new Date(moment) : moment);
 }
 
-type Checked = { ok: true; item: InterviewItemDto } | { ok: false; id: string | null; reason: string };
+const TAKEN = 'another interview already has this id; keep it on the device and tell your supervisor';
+const REFUSED = 'the server could not store this interview; keep it on the device and tell your supervisor';
 
-function checkShape(raw: unknown): Checked {
-  const id = typeof (raw as { id?: unknown })?.id === 'string' ? (raw as { id: string }).id : null;
-  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) return { ok: false, id, reason: 'not an interview object' };
-  const item = plainToInstance(InterviewItemDto, raw);
-  const errors = validateSync(item, { whitelist: true, forbidNonWhitelisted: true });
-  if (errors.length) {
-    const reason = errors.flatMap((e) => Object.values(e.constraints ?? {})).join('; ');
-    return { ok: false, id, reason };
-  }
-  if (Date.parse(item.endedAt) < Date.parse(item.startedAt)) return { ok: false, id, reason: 'endedAt is before startedAt' };
-  return { ok: true, item };
-}
-
-/** Category ids of a complete, one per active variable, in variable order; or a reason. */
-function categoryIds(item: InterviewItemDto, targets: ActiveTargets): string[] | string {
-  const given = item.categories ?? {};
-  const known = new Set(targets.variables.map((v) => v.id));
-  const unknown = Object.keys(given).find((k) => !known.has(k));
-  if (unknown) return `unknown quota variable ${unknown}`;
-  const ids: string[] = [];
-  for (const v of targets.variables) {
-    const value = given[v.id];
-    if (value === undefined || value === null) {
-      if (item.disposition === 'complete') return `${v.name}: no category given`;
-      continue;
-    }
-    const category = v.categories.find((c) => c.id === value);
-    if (!category) return `${v.name}: unknown category ${String(value)}`;
-    ids.push(category.id);
-  }
-  return ids;
-}
+/** What an interview says, to tell a repeat of the same interview from a different one with its id. */
+const fingerprint = (item: CheckedItem) =>
+  JSON.stringify([item.disposition, Object.entries(item.categories).sort(), item.headlineAnswer ?? null, +item.startedAt, +item.endedAt]);
 
 @Injectable()
 export class SyncService {
@@ -77,61 +54,13 @@ export class SyncService {
   ) {}
 
   async sync(user: AuthUser, projectId: string, batch: unknown[]): Promise<SyncReply> {
-    const project = await this.access.findForInterviewer(user, projectId);
-    const fieldDay = fieldDayIn(project.time_zone);
-    const checked = batch.map(checkShape);
-
+    await this.access.findForInterviewer(user, projectId);
+    const checked = batch.map(checkItem);
     const results = await this.db.transaction(async (trx) => {
-      await trx('projects').where({ id: projectId }).forUpdate().first('id');
-      const targets = await loadActiveTargets(trx, projectId);
-      const ids = checked.flatMap((c) => (c.ok ? [c.item.id] : []));
-      const existing = new Map(
-        (await trx('interviews').whereIn('id', ids).select('id', 'project_id', 'interviewer_id')).map((r) => [r.id, r]),
-      );
-      const cells = await this.cells.cellCounts(projectId, trx);
-      const seen = new Set<string>();
-      const rows: Omit<InterviewRow, 'received_at' | 'review_status' | 'counted'>[] = [];
-
-      const out: SyncResult[] = checked.map((c) => {
-        if (!c.ok) return { id: c.id, status: 'rejected', reason: c.reason };
-        const { item } = c;
-        const prior = existing.get(item.id);
-        if (prior || seen.has(item.id)) {
-          if (prior && (prior.project_id !== projectId || prior.interviewer_id !== user.id)) {
-            return { id: item.id, status: 'rejected', reason: 'this id belongs to another interview' };
-          }
-          return { id: item.id, status: 'duplicate' };
-        }
-        const categories = categoryIds(item, targets);
-        if (typeof categories === 'string') return { id: item.id, status: 'rejected', reason: categories };
-        if (item.disposition === 'complete' && item.headlineAnswer === undefined) {
-          return { id: item.id, status: 'rejected', reason: 'headlineAnswer is missing' };
-        }
-        seen.add(item.id);
-        let overQuota = false;
-        if (item.disposition === 'complete') {
-          const mine = cells.filter((cell) => cell.categoryIds.every((id) => categories.includes(id)));
-          overQuota = mine.some((cell) => cell.status === 'closed' || cell.achieved >= cell.target);
-          for (const cell of mine) cell.achieved += 1;
-        }
-        rows.push({
-          id: item.id,
-          project_id: projectId,
-          interviewer_id: user.id,
-          disposition: item.disposition,
-          category_ids: categories,
-          headline_answer: item.disposition === 'complete' ? (item.headlineAnswer as boolean) : null,
-          started_at: new Date(item.startedAt),
-          ended_at: new Date(item.endedAt),
-          field_day: fieldDay(item.endedAt),
-          over_quota: overQuota,
-        });
-        return { id: item.id, status: 'accepted', overQuota };
-      });
-      if (rows.length) await trx('interviews').insert(rows).onConflict('id').ignore();
-      return out;
+      // The lock also gives the project's status and field dates as they are now.
+      const project = (await trx('projects').where({ id: projectId }).forUpdate().first()) as ProjectRow;
+      return this.store(trx, user, project, checked);
     });
-
     const count = (status: SyncResult['status']) => results.filter((r) => r.status === status).length;
     return {
       results,
@@ -140,5 +69,71 @@ export class SyncService {
       rejected: count('rejected'),
       cells: await this.cells.cellCounts(projectId),
     };
+  }
+
+  private async store(trx: Knex.Transaction, user: AuthUser, project: ProjectRow, checked: ReturnType<typeof checkItem>[]) {
+    const fieldDay = fieldDayIn(project.time_zone);
+    const flagContext = { status: project.status, fieldStart: project.field_start, fieldEnd: project.field_end };
+    const targets = await loadActiveTargets(trx, project.id);
+    const ids = [...new Set(checked.flatMap((c) => (c.ok ? [c.item.id] : [])))];
+    const ours = (row: { project_id: string; interviewer_id: string }) => row.project_id === project.id && row.interviewer_id === user.id;
+    const existing = new Map((await trx('interviews').whereIn('id', ids).select('id', 'project_id', 'interviewer_id')).map((r) => [r.id, r]));
+    const cells = await this.cells.cellCounts(project.id, trx);
+    const firstCopy = new Map<string, { index: number; fingerprint: string }>();
+    const repeats = new Map<number, number>();
+    const rows: NewInterview[] = [];
+
+    const out: SyncResult[] = checked.map((c, index): SyncResult => {
+      if (!c.ok) return { id: c.id, status: 'rejected', reason: c.reason };
+      const { item } = c;
+      const prior = existing.get(item.id);
+      if (prior) return ours(prior) ? { id: item.id, status: 'duplicate' } : { id: item.id, status: 'rejected', reason: TAKEN };
+      const first = firstCopy.get(item.id);
+      if (first) {
+        if (first.fingerprint !== fingerprint(item)) return { id: item.id, status: 'rejected', reason: 'another interview in this batch has the same id' };
+        repeats.set(index, first.index);
+        return { id: item.id, status: 'duplicate' };
+      }
+      const categories = checkCategories(item, targets);
+      if (!Array.isArray(categories)) return { id: item.id, status: 'rejected', reason: categories.reason };
+      firstCopy.set(item.id, { index, fingerprint: fingerprint(item) });
+      let overQuota = false;
+      if (item.disposition === 'complete') {
+        const mine = cells.filter((cell) => cell.categoryIds.every((id) => categories.includes(id)));
+        overQuota = mine.some((cell) => cell.status === 'closed' || cell.achieved >= cell.target);
+        for (const cell of mine) cell.achieved += 1;
+      }
+      const day = fieldDay(item.endedAt);
+      const flags = flagsOnArrival(flagContext, day);
+      rows.push({
+        id: item.id,
+        project_id: project.id,
+        interviewer_id: user.id,
+        disposition: item.disposition,
+        category_ids: categories,
+        headline_answer: item.disposition === 'complete' ? (item.headlineAnswer as boolean) : null,
+        started_at: item.startedAt,
+        ended_at: item.endedAt,
+        field_day: day,
+        over_quota: overQuota,
+        flags,
+      });
+      return { id: item.id, status: 'accepted', overQuota, flags };
+    });
+
+    const { stored, refused } = await insertGuarded(trx, rows);
+    const missing = rows.filter((r) => !stored.has(r.id) && !refused.has(r.id)).map((r) => r.id);
+    // Ids another batch stored after our look-up (another project's batch is not serialised with ours).
+    const takenMeanwhile = new Map(
+      missing.length ? (await trx('interviews').whereIn('id', missing).select('id', 'project_id', 'interviewer_id')).map((r) => [r.id, r]) : [],
+    );
+    out.forEach((result, index) => {
+      if (result.status !== 'accepted' || !result.id || stored.has(result.id)) return;
+      const taken = takenMeanwhile.get(result.id);
+      out[index] = taken && ours(taken) ? { id: result.id, status: 'duplicate' } : { id: result.id, status: 'rejected', reason: taken ? TAKEN : REFUSED };
+    });
+    // A repeat inside the batch shares the fate of its first copy: never "duplicate" of something not stored.
+    for (const [index, first] of repeats) if (out[first]!.status !== 'accepted') out[index] = out[first]!;
+    return out;
   }
 }

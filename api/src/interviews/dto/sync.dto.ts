@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsISO8601, IsObject, IsOptional, IsUUID } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsString, IsObject, IsOptional } from 'class-validator';
 import { DISPOSITIONS, type Disposition } from '../../database/tables.js';
 
 export const SYNC_BATCH_LIMIT = 1000;
@@ -13,8 +13,8 @@ export class SyncBatchDto {
 }
 
 export class InterviewItemDto {
-  @ApiProperty({ description: 'UUID made on the device when the contact was logged' })
-  @IsUUID('all', { message: 'id must be a UUID' })
+  @ApiProperty({ description: 'UUID made on the device when the contact was logged; compared case-insensitively' })
+  @IsString({ message: 'id must be a UUID' })
   id: string;
 
   @ApiProperty({ enum: DISPOSITIONS })
@@ -31,11 +31,12 @@ export class InterviewItemDto {
   @IsBoolean({ message: 'headlineAnswer must be true or false' })
   headlineAnswer?: boolean;
 
-  @ApiProperty({ example: '2026-11-20T10:02:00Z' })
-  @IsISO8601({ strict: true }, { message: 'startedAt must be a date-time' })
+  // Read in full (RFC 3339, plausible year) by item-check.ts, which names what is wrong.
+  @ApiProperty({ example: '2026-11-20T10:02:00Z', description: 'RFC 3339 date and time with Z or an offset' })
+  @IsString({ message: 'startedAt must be a date and time such as 2026-11-20T10:02:00Z' })
   startedAt: string;
 
-  @ApiProperty({ example: '2026-11-20T10:19:00Z' })
-  @IsISO8601({ strict: true }, { message: 'endedAt must be a date-time' })
+  @ApiProperty({ example: '2026-11-20T10:19:00Z', description: 'RFC 3339 date and time with Z or an offset' })
+  @IsString({ message: 'endedAt must be a date and time such as 2026-11-20T10:02:00Z' })
   endedAt: string;
 }

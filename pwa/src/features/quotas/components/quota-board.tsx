@@ -13,6 +13,7 @@ import { initialView, sortedBy, visibleCells, type BoardView } from './board-vie
 import { CellList } from './cell-list';
 import { CellTable } from './cell-table';
 import { CloseCellDialog } from './close-cell-dialog';
+import { FlaggedInterviewsSection } from './flagged-interviews';
 import { InterviewerProgressTable } from './interviewer-progress';
 
 /** One project's board: cells (table on desktop, list on a phone) and interviewers' completes. */
@@ -80,6 +81,7 @@ function BoardContent({ board, projectId, refreshing, checkedAt }: { board: Boar
       ) : (
         <CellList cells={cells} onToggle={ask} />
       )}
+      <FlaggedInterviewsSection projectId={projectId} />
       <section className="pl-section" aria-labelledby="pl-interviewers-heading">
         <h2 id="pl-interviewers-heading" className="pl-section-title">
           Interviewers

@@ -1,0 +1,36 @@
+// Counts of a project's kept-and-flagged interviews by reason, for the quota board. Reads
+// only flagged rows (partial index interviews_flagged), so unflagged interviews cost nothing.
+import { Inject, Injectable } from '@nestjs/common';
+import type { Knex } from 'knex';
+import { KNEX } from '../database/database.constants.js';
+import { FLAG_CODES, FLAG_REASONS, type FlagCode } from './flags.js';
+
+export interface FlaggedInterviews {
+  /** Interviews with at least one flag (one interview may carry several). */
+  total: number;
+  byReason: { code: string; reason: string; count: number }[];
+}
+
+const order = (code: string) => (FLAG_CODES.includes(code as FlagCode) ? FLAG_CODES.indexOf(code as FlagCode) : FLAG_CODES.length);
+
+@Injectable()
+export class FlagCountsService {
+  constructor(@Inject(KNEX) private readonly db: Knex) {}
+
+  async counts(projectId: string): Promise<FlaggedInterviews> {
+    const { rows } = await this.db.raw<{ rows: { code: string | null; n: number }[] }>(
+      `SELECT f.code, count(DISTINCT i.id)::int AS n
+         FROM interviews i LEFT JOIN LATERAL unnest(i.flags) AS f(code) ON true
+        WHERE i.project_id = ? AND cardinality(i.flags) > 0
+        GROUP BY ROLLUP (f.code)`, // the row with no code is the total of interviews
+      [projectId],
+    );
+    return {
+      total: rows.find((r) => r.code === null)?.n ?? 0,
+      byReason: rows
+        .filter((r) => r.code !== null)
+        .map((r) => ({ code: r.code as string, reason: FLAG_REASONS[r.code as FlagCode] ?? (r.code as string).replace(/_/g, ' '), count: r.n }))
+        .sort((a, b) => order(a.code) - order(b.code) || a.code.localeCompare(b.code)),
+    };
+  }
+}
