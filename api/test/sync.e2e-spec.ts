@@ -116,6 +116,16 @@ describe('interview sync', () => {
     expect(reopened.body.status).not.toBe('closed');
   });
 
+  it('answers with the cells as they stand after the batch, the same as a fresh read', async () => {
+    const known = complete(someone());
+    await interviewer.post(syncPath, { interviews: [known] });
+    const batch = [...Array.from({ length: 25 }, () => complete(someone())), known, { ...complete(someone()), id: 'not-a-uuid' }];
+    const res = await interviewer.post(syncPath, { interviews: batch });
+    expect(res.body).toMatchObject({ accepted: 25, duplicates: 1, rejected: 1 });
+    const fresh = (await interviewer.get(`/api/projects/${org.projectId}/cells`)).body.cells;
+    expect(res.body.cells).toEqual(fresh);
+  });
+
   it('refuses batches over 1,000 interviews as a whole', async () => {
     const batch = Array.from({ length: 1001 }, () => complete(someone()));
     const res = await interviewer.post(syncPath, { interviews: batch });

@@ -1,7 +1,9 @@
-// Stores a batch's new interviews in one statement inside a savepoint. Every item was
-// checked beforehand, so the database should refuse nothing; if it still does, the rows go
-// in one by one, each in its own savepoint, and only the refused ones are reported, so one
-// row can never fail the batch.
+// Stores a batch's new interviews. Every item was checked beforehand, so the database
+// should refuse nothing, and the sync first tries one plain statement (insertAll). If the
+// database still refuses it, the sync starts its transaction again and stores through
+// insertGuarded: the batch in a savepoint, and if that is refused the rows one by one, each
+// in its own savepoint, so only the refused ones are reported and one row can never fail
+// the batch.
 import { Logger } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { InterviewRow } from '../database/tables.js';
@@ -24,6 +26,12 @@ async function insert(trx: Knex.Transaction, rows: NewInterview[]): Promise<stri
     stored.push(...(await sp('interviews').insert(rows).onConflict('id').ignore().returning('id')));
   });
   return stored.map((r) => r.id);
+}
+
+/** One plain statement: the common case, with no savepoint's extra round trips. Throws if refused. */
+export async function insertAll(trx: Knex.Transaction, rows: NewInterview[]): Promise<InsertOutcome> {
+  const stored = rows.length ? await trx('interviews').insert(rows).onConflict('id').ignore().returning('id') : [];
+  return { stored: new Set(stored.map((r: { id: string }) => r.id)), refused: new Set() };
 }
 
 export async function insertGuarded(trx: Knex.Transaction, rows: NewInterview[]): Promise<InsertOutcome> {

@@ -10,12 +10,13 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
+import { isDatabaseUnavailable } from '../common/database-unavailable.js';
 import type { ProjectRow } from '../database/tables.js';
 import { ProjectAccess } from '../projects/project-access.service.js';
 import { loadActiveTargets } from '../quotas/cell-allocator.js';
-import { CellsService, type CellView } from '../quotas/cells.service.js';
+import { CellsService, withCounts, type CellView } from '../quotas/cells.service.js';
 import { flagsOnArrival, type FlagCode } from './flags.js';
-import { insertGuarded, type NewInterview } from './guarded-insert.js';
+import { insertAll, insertGuarded, type NewInterview } from './guarded-insert.js';
 import { checkCategories, checkItem, type CheckedItem } from './item-check.js';
 
 export type SyncResult =
@@ -56,29 +57,36 @@ export class SyncService {
   async sync(user: AuthUser, projectId: string, batch: unknown[]): Promise<SyncReply> {
     await this.access.findForInterviewer(user, projectId);
     const checked = batch.map(checkItem);
-    const results = await this.db.transaction(async (trx) => {
-      // The lock also gives the project's status and field dates as they are now.
-      const project = (await trx('projects').where({ id: projectId }).forUpdate().first()) as ProjectRow;
-      return this.store(trx, user, project, checked);
-    });
+    // The project's lock is held for as few round trips as possible: one plain insert in the
+    // common case; only if the database refuses it, the whole batch again, guarded row by row.
+    const attempt = (guarded: boolean) =>
+      this.db.transaction(async (trx) => {
+        // The lock also gives the project's status and field dates as they are now.
+        const project = (await trx('projects').where({ id: projectId }).forUpdate().first()) as ProjectRow;
+        return this.store(trx, user, project, checked, guarded);
+      });
+    let stored: { results: SyncResult[]; cells: CellView[] };
+    try {
+      stored = await attempt(false);
+    } catch (error) {
+      if (isDatabaseUnavailable(error)) throw error;
+      stored = await attempt(true);
+    }
+    const { results, cells } = stored;
     const count = (status: SyncResult['status']) => results.filter((r) => r.status === status).length;
-    return {
-      results,
-      accepted: count('accepted'),
-      duplicates: count('duplicate'),
-      rejected: count('rejected'),
-      cells: await this.cells.cellCounts(projectId),
-    };
+    return { results, accepted: count('accepted'), duplicates: count('duplicate'), rejected: count('rejected'), cells };
   }
 
-  private async store(trx: Knex.Transaction, user: AuthUser, project: ProjectRow, checked: ReturnType<typeof checkItem>[]) {
+  private async store(trx: Knex.Transaction, user: AuthUser, project: ProjectRow, checked: ReturnType<typeof checkItem>[], guarded: boolean) {
     const fieldDay = fieldDayIn(project.time_zone);
     const flagContext = { status: project.status, fieldStart: project.field_start, fieldEnd: project.field_end };
     const targets = await loadActiveTargets(trx, project.id);
     const ids = [...new Set(checked.flatMap((c) => (c.ok ? [c.item.id] : [])))];
     const ours = (row: { project_id: string; interviewer_id: string }) => row.project_id === project.id && row.interviewer_id === user.id;
     const existing = new Map((await trx('interviews').whereIn('id', ids).select('id', 'project_id', 'interviewer_id')).map((r) => [r.id, r]));
-    const cells = await this.cells.cellCounts(project.id, trx);
+    // Read under the lock: the reply's cells are these plus what this batch stored (no read after commit).
+    const before = await this.cells.cellCounts(project.id, trx);
+    const cells = before.map((cell) => ({ ...cell }));
     const firstCopy = new Map<string, { index: number; fingerprint: string }>();
     const repeats = new Map<number, number>();
     const rows: NewInterview[] = [];
@@ -121,7 +129,7 @@ export class SyncService {
       return { id: item.id, status: 'accepted', overQuota, flags };
     });
 
-    const { stored, refused } = await insertGuarded(trx, rows);
+    const { stored, refused } = await (guarded ? insertGuarded : insertAll)(trx, rows);
     const missing = rows.filter((r) => !stored.has(r.id) && !refused.has(r.id)).map((r) => r.id);
     // Ids another batch stored after our look-up (another project's batch is not serialised with ours).
     const takenMeanwhile = new Map(
@@ -134,6 +142,15 @@ export class SyncService {
     });
     // A repeat inside the batch shares the fate of its first copy: never "duplicate" of something not stored.
     for (const [index, first] of repeats) if (out[first]!.status !== 'accepted') out[index] = out[first]!;
-    return out;
+    return { results: out, cells: cellsAfter(before, rows.filter((r) => stored.has(r.id))) };
   }
+}
+
+/** The cells after this batch: the counts read under the lock plus the completes it stored. */
+function cellsAfter(before: CellView[], stored: NewInterview[]): CellView[] {
+  const completes = stored.filter((row) => row.disposition === 'complete');
+  return before.map((cell) => {
+    const mine = completes.filter((row) => cell.categoryIds.every((id) => row.category_ids.includes(id)));
+    return withCounts(cell, cell.achieved + mine.length, cell.overQuota + mine.filter((row) => row.over_quota).length);
+  });
 }

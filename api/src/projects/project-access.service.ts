@@ -36,10 +36,14 @@ export class ProjectAccess {
 
   /** For logging interviews: the project must exist in the organisation and be assigned to the interviewer. */
   async findForInterviewer(user: AuthUser, projectId: string): Promise<ProjectRow> {
-    const row = await this.db('projects').where({ id: projectId, organisation_id: user.organisationId }).first();
+    // One round trip: the project and whether this interviewer is on its team.
+    const row = (await this.db('projects')
+      .where({ id: projectId, organisation_id: user.organisationId })
+      .select('projects.*', this.db.raw('EXISTS (SELECT 1 FROM project_members m WHERE m.project_id = projects.id AND m.user_id = ?) AS is_member', [user.id]))
+      .first()) as (ProjectRow & { is_member: boolean }) | undefined;
     if (!row) throw new NotFoundException('No such project');
-    const member = await this.db('project_members').where({ project_id: projectId, user_id: user.id }).first();
-    if (!member) throw new ForbiddenException('You are not assigned to this project; ask your supervisor to add you');
-    return row;
+    if (!row.is_member) throw new ForbiddenException('You are not assigned to this project; ask your supervisor to add you');
+    const { is_member: _member, ...project } = row;
+    return project;
   }
 }

@@ -45,6 +45,18 @@ export interface InterviewerProgress {
   overQuota: number;
 }
 
+/** A cell with its counts and what follows from them (remaining, fill, status). */
+export function withCounts(cell: Pick<CellView, 'id' | 'kind' | 'label' | 'categoryIds' | 'target' | 'closedAt'>, achieved: number, overQuota: number): CellView {
+  return {
+    ...cell,
+    achieved,
+    overQuota,
+    remaining: Math.max(0, cell.target - achieved),
+    fillRate: cell.target > 0 ? achieved / cell.target : 1,
+    status: cellStatus(cell.target, achieved, cell.closedAt !== null),
+  };
+}
+
 @Injectable()
 export class CellsService {
   private readonly boards = new Coalescer<BoardCounts>();
@@ -71,19 +83,13 @@ export class CellsService {
         GROUP BY c.id ORDER BY c.position`,
       [projectId, projectId],
     );
-    return rows.map((r) => ({
-      id: r.id,
-      kind: r.kind,
-      label: r.label,
-      categoryIds: r.category_ids,
-      target: r.target,
-      achieved: r.achieved,
-      overQuota: r.over_quota,
-      remaining: Math.max(0, r.target - r.achieved),
-      fillRate: r.target > 0 ? r.achieved / r.target : 1,
-      status: cellStatus(r.target, r.achieved, r.closed_at !== null),
-      closedAt: r.closed_at?.toISOString() ?? null,
-    }));
+    return rows.map((r) =>
+      withCounts(
+        { id: r.id, kind: r.kind, label: r.label, categoryIds: r.category_ids, target: r.target, closedAt: r.closed_at?.toISOString() ?? null },
+        r.achieved,
+        r.over_quota,
+      ),
+    );
   }
 
   async cells(projectId: string): Promise<CellsView> {
