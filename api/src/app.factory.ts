@@ -8,6 +8,7 @@ import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
 import { bodyErrorHandler } from './common/middleware/body-errors.js';
 import { pwaFiles } from './common/middleware/pwa-files.js';
+import { readBulkhead } from './common/middleware/read-bulkhead.js';
 import { createValidationPipe } from './common/validation.js';
 import type { AppConfig } from './config/config.js';
 
@@ -38,6 +39,8 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
     }),
   );
   if (config.pwaDist) app.use(pwaFiles(config.pwaDist));
+  // Four reads at a time keep both cores busy while a sync never waits behind a crowd of polls.
+  app.use(readBulkhead(4));
   app.use(express.json({ limit: config.bodyLimit }));
   app.use(bodyErrorHandler);
   app.setGlobalPrefix('api');

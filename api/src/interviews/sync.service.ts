@@ -13,7 +13,7 @@ import { KNEX } from '../database/database.constants.js';
 import { isDatabaseUnavailable } from '../common/database-unavailable.js';
 import type { ProjectRow } from '../database/tables.js';
 import { ProjectAccess } from '../projects/project-access.service.js';
-import { loadActiveTargets } from '../quotas/cell-allocator.js';
+import { loadActiveTargets, type ActiveTargets } from '../quotas/cell-allocator.js';
 import { CellsService, withCounts, type CellView } from '../quotas/cells.service.js';
 import { flagsOnArrival, type FlagCode } from './flags.js';
 import { insertAll, insertGuarded, type NewInterview } from './guarded-insert.js';
@@ -42,6 +42,13 @@ export function fieldDayIn(timeZone: string): (moment: Date | string) => string 
 const TAKEN = 'another interview already has this id; keep it on the device and tell your supervisor';
 const REFUSED = 'the server could not store this interview; keep it on the device and tell your supervisor';
 
+interface ReadBeforeLock {
+  checked: ReturnType<typeof checkItem>[];
+  targets: ActiveTargets;
+  /** Ids of the batch already stored, with whose they are. */
+  known: Map<string, { id: string; project_id: string; interviewer_id: string }>;
+}
+
 /** What an interview says, to tell a repeat of the same interview from a different one with its id. */
 const fingerprint = (item: CheckedItem) =>
   JSON.stringify([item.disposition, Object.entries(item.categories).sort(), item.headlineAnswer ?? null, +item.startedAt, +item.endedAt]);
@@ -57,13 +64,23 @@ export class SyncService {
   async sync(user: AuthUser, projectId: string, batch: unknown[]): Promise<SyncReply> {
     await this.access.findForInterviewer(user, projectId);
     const checked = batch.map(checkItem);
-    // The project's lock is held for as few round trips as possible: one plain insert in the
-    // common case; only if the database refuses it, the whole batch again, guarded row by row.
+    // The project's lock is held for as few round trips as possible (lock, cells, insert,
+    // commit). The targets and the ids already stored are read before it, side by side: an id
+    // stored meanwhile is caught after the insert, and a target changed meanwhile is the
+    // office changing something while the device was out, which never refuses an interview.
+    const ids = [...new Set(checked.flatMap((c) => (c.ok ? [c.item.id] : [])))];
+    const [targets, existing] = await Promise.all([
+      loadActiveTargets(this.db, projectId),
+      ids.length ? this.db('interviews').whereIn('id', ids).select('id', 'project_id', 'interviewer_id') : Promise.resolve([]),
+    ]);
+    const known = new Map(existing.map((r) => [r.id, r]));
+    // One plain insert in the common case; only if the database refuses it, the whole batch
+    // again, guarded row by row.
     const attempt = (guarded: boolean) =>
       this.db.transaction(async (trx) => {
         // The lock also gives the project's status and field dates as they are now.
         const project = (await trx('projects').where({ id: projectId }).forUpdate().first()) as ProjectRow;
-        return this.store(trx, user, project, checked, guarded);
+        return this.store(trx, user, project, { checked, targets, known }, guarded);
       });
     let stored: { results: SyncResult[]; cells: CellView[] };
     try {
@@ -77,13 +94,11 @@ export class SyncService {
     return { results, accepted: count('accepted'), duplicates: count('duplicate'), rejected: count('rejected'), cells };
   }
 
-  private async store(trx: Knex.Transaction, user: AuthUser, project: ProjectRow, checked: ReturnType<typeof checkItem>[], guarded: boolean) {
+  private async store(trx: Knex.Transaction, user: AuthUser, project: ProjectRow, read: ReadBeforeLock, guarded: boolean) {
+    const { checked, targets, known: existing } = read;
     const fieldDay = fieldDayIn(project.time_zone);
     const flagContext = { status: project.status, fieldStart: project.field_start, fieldEnd: project.field_end };
-    const targets = await loadActiveTargets(trx, project.id);
-    const ids = [...new Set(checked.flatMap((c) => (c.ok ? [c.item.id] : [])))];
     const ours = (row: { project_id: string; interviewer_id: string }) => row.project_id === project.id && row.interviewer_id === user.id;
-    const existing = new Map((await trx('interviews').whereIn('id', ids).select('id', 'project_id', 'interviewer_id')).map((r) => [r.id, r]));
     // Read under the lock: the reply's cells are these plus what this batch stored (no read after commit).
     const before = await this.cells.cellCounts(project.id, trx);
     const cells = before.map((cell) => ({ ...cell }));
