@@ -1,7 +1,7 @@
 // Helpers for the fieldwork suites: an API client per signed-in user and a standard
 // set of quota targets (invented, for tests only).
 import { randomUUID } from 'node:crypto';
-import { signIn, type Harness, type TestOrg } from './harness.js';
+import { createOrg, signIn, type Harness, type TestOrg } from './harness.js';
 
 export async function client(h: Harness, org: TestOrg, role: keyof TestOrg['users']) {
   const { accessToken } = await signIn(h, org.users[role].email);
@@ -48,4 +48,14 @@ export function pick(targets: Targets, labels: Record<string, string>): Record<s
 export function complete(categories: Record<string, string>, headlineAnswer = true, at = '2026-11-20T10:00:00.000Z') {
   const end = new Date(Date.parse(at) + 15 * 60_000).toISOString();
   return { id: randomUUID(), disposition: 'complete', categories, headlineAnswer, startedAt: at, endedAt: end };
+}
+
+/** An organisation with a project taking interviews: the standard targets set, its lead and interviewer signed in. */
+export async function syncProject(h: Harness, name: string, project: Record<string, unknown> = {}) {
+  const org = await createOrg(h.db, name);
+  const lead = await client(h, org, 'lead');
+  await lead.patch(`/api/projects/${org.projectId}`, { targetSize: 100, headlineQuestion: 'Support?', ...project });
+  const targets = (await lead.put(`/api/projects/${org.projectId}/targets`, TARGETS)).body as Targets;
+  const interviewer = await client(h, org, 'interviewer');
+  return { org, lead, targets, interviewer, syncPath: `/api/projects/${org.projectId}/interviews/sync` };
 }

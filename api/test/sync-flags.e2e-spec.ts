@@ -2,7 +2,7 @@
 // accepted with the flag, counted by reason for the supervisor, named in the export.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createOrg, startApp, type Harness, type TestOrg } from './harness.js';
-import { client, complete, pick, TARGETS, type Targets } from './fieldwork-helpers.js';
+import { client, complete, pick, syncProject, type Targets } from './fieldwork-helpers.js';
 
 let h: Harness;
 let org: TestOrg;
@@ -17,14 +17,7 @@ const storedFlags = async (id: string) => (await h.db('interviews').where({ id }
 
 beforeAll(async () => {
   h = await startApp();
-  org = await createOrg(h.db, 'Flags');
-  lead = await client(h, org, 'lead');
-  await lead.patch(`/api/projects/${org.projectId}`, {
-    targetSize: 100, headlineQuestion: 'Support?', fieldStart: '2026-11-16', fieldEnd: '2026-12-06', status: 'fieldwork',
-  });
-  targets = (await lead.put(`/api/projects/${org.projectId}/targets`, TARGETS)).body;
-  syncPath = `/api/projects/${org.projectId}/interviews/sync`;
-  interviewer = await client(h, org, 'interviewer');
+  ({ org, lead, targets, syncPath, interviewer } = await syncProject(h, 'Flags', { fieldStart: '2026-11-16', fieldEnd: '2026-12-06', status: 'fieldwork' }));
 });
 afterAll(() => h.close());
 

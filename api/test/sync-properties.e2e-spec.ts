@@ -3,8 +3,8 @@
 import fc from 'fast-check';
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createOrg, startApp, type Harness, type TestOrg } from './harness.js';
-import { client, TARGETS, type Targets } from './fieldwork-helpers.js';
+import { startApp, type Harness, type TestOrg } from './harness.js';
+import { client, syncProject, type Targets } from './fieldwork-helpers.js';
 
 let h: Harness;
 let org: TestOrg;
@@ -13,11 +13,7 @@ let interviewer: Awaited<ReturnType<typeof client>>;
 
 beforeAll(async () => {
   h = await startApp();
-  org = await createOrg(h.db, 'Props');
-  const lead = await client(h, org, 'lead');
-  await lead.patch(`/api/projects/${org.projectId}`, { targetSize: 100, headlineQuestion: 'Support?' });
-  targets = (await lead.put(`/api/projects/${org.projectId}/targets`, TARGETS)).body;
-  interviewer = await client(h, org, 'interviewer');
+  ({ org, targets, interviewer } = await syncProject(h, 'Props'));
 });
 afterAll(() => h.close());
 

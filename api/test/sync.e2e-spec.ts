@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createOrg, startApp, type Harness, type TestOrg } from './harness.js';
-import { client, complete, pick, TARGETS, type Targets } from './fieldwork-helpers.js';
+import { client, complete, pick, syncProject, type Targets } from './fieldwork-helpers.js';
 
 let h: Harness;
 let org: TestOrg;
@@ -13,12 +13,7 @@ const rowCount = async (ids: string[]) => Number((await h.db('interviews').where
 
 beforeAll(async () => {
   h = await startApp();
-  org = await createOrg(h.db, 'Sync');
-  const lead = await client(h, org, 'lead');
-  await lead.patch(`/api/projects/${org.projectId}`, { targetSize: 100, headlineQuestion: 'Support?' });
-  targets = (await lead.put(`/api/projects/${org.projectId}/targets`, TARGETS)).body;
-  syncPath = `/api/projects/${org.projectId}/interviews/sync`;
-  interviewer = await client(h, org, 'interviewer');
+  ({ org, targets, syncPath, interviewer } = await syncProject(h, 'Sync'));
 });
 afterAll(() => h.close());
 
