@@ -8,11 +8,6 @@ export async function countUnsent(): Promise<number> {
   return db.outbox.count();
 }
 
-/** How many of this interviewer's entries wait to be sent. */
-export async function countWaiting(interviewerId: string): Promise<number> {
-  return (await listWaiting(interviewerId)).length;
-}
-
 /** This interviewer's entries still waiting to be sent; `undefined` while the device storage is being read. */
 export function useUnsentCount(interviewerId: string): number | undefined {
   return useLiveQuery(async () => (await listWaiting(interviewerId)).length, [interviewerId]);

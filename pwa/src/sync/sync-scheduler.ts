@@ -109,8 +109,3 @@ export function startSyncSchedule(): () => void {
     failures = 0;
   };
 }
-
-/** Resolves when no attempt is running (tests wait on it). */
-export async function whenScheduleIdle(): Promise<void> {
-  while (busy) await busy;
-}
