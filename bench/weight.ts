@@ -1,9 +1,12 @@
 /**
- * `npm run bench:weight`: end-to-end `plumbline weight` (read, rake, write) against Rscript
+ * `npm run bench:weight`: end-to-end `plumbline weight` (read, rake, write) run as the README
+ * tells analysts to run it (the binary on the PATH after `npm link -w api`, i.e. api/bin/plumbline.js
+ * started through its `#!/usr/bin/env node` line), and through `npx` for comparison, against Rscript
  * doing the same with survey::rake, on a generated 200,000-row Vellmoor file with four
  * margins at tolerance 1e-9. Reports wall time, peak memory (GNU time's maximum resident
  * set size) and the largest weight difference, plus the in-process raking time at 20,000 and
- * 200,000 rows to show that raking works on cells, not rows. Files go to bench/out/.
+ * 200,000 rows to show that raking works on cells, not rows, and the start-up of a small
+ * command (`posterior`) both ways. Files go to bench/out/.
  */
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
@@ -30,16 +33,28 @@ execFileSync(process.execPath, [join(root, 'node_modules/typescript/bin/tsc'), '
 /** Runs a command under GNU time; returns wall seconds and peak resident memory in MiB. */
 function measure(command: string, args: string[]): { seconds: number; peakMiB: number; stdout: string } {
   const start = performance.now();
-  const result = spawnSync('/usr/bin/time', ['-f', '%M', command, ...args], { encoding: 'utf8', maxBuffer: 64 << 20 });
+  const result = spawnSync('/usr/bin/time', ['-f', '%M', command, ...args], { cwd: root, encoding: 'utf8', maxBuffer: 64 << 20 });
   const seconds = (performance.now() - start) / 1000;
   if (result.status !== 0) throw new Error(`${command} failed: ${result.stderr}`);
   const kib = Number(result.stderr.trim().split('\n').at(-1));
   return { seconds, peakMiB: kib / 1024, stdout: result.stdout };
 }
 
-const ours = measure(process.execPath, [join(root, 'api/bin/plumbline.js'), 'weight', '--data', data, '--targets', targets,
-  '--out', join(out, 'plumbline-weighted.csv'), '--tolerance', '1e-9', '--max-iterations', '1000']);
+/** What `plumbline` on the PATH runs: the linked file itself, started by the kernel through its shebang line. */
+const binary = join(root, 'api/bin/plumbline.js');
+const weightArgs = (file: string) => ['weight', '--data', data, '--targets', targets, '--out', join(out, file), '--tolerance', '1e-9', '--max-iterations', '1000'];
+const ours = measure(binary, weightArgs('plumbline-weighted.csv'));
 const report = JSON.parse(ours.stdout);
+const throughNpx = measure('npx', ['--no-install', 'plumbline', ...weightArgs('plumbline-npx-weighted.csv')]);
+
+/** Median wall time in ms of `runs` starts of a small command (start-up, not work, dominates). */
+function startUp(command: string, args: string[], runs = 11): number {
+  const times = Array.from({ length: runs }, () => measure(command, args).seconds * 1000).sort((x, y) => x - y);
+  return times[Math.floor(runs / 2)] as number;
+}
+const posterior = ['posterior', '--successes', '62', '--trials', '100'];
+const startUpLinked = startUp(binary, posterior);
+const startUpNpx = startUp('npx', ['--no-install', 'plumbline', ...posterior]);
 
 const rScript = join(out, 'rake.R');
 writeFileSync(rScript, `
@@ -96,13 +111,15 @@ const fmt = (x: number, digits = 2) => x.toFixed(digits);
 console.log(`
 | ${ROWS.toLocaleString('en')} rows, 4 margins, tolerance 1e-9 | wall time | peak memory |
 |---|---|---|
-| plumbline weight (node ${process.versions.node}) | ${fmt(ours.seconds)} s | ${fmt(ours.peakMiB, 0)} MiB |
+| plumbline weight (on the PATH; node ${process.versions.node}) | ${fmt(ours.seconds)} s | ${fmt(ours.peakMiB, 0)} MiB |
+| npx plumbline weight | ${fmt(throughNpx.seconds)} s | ${fmt(throughNpx.peakMiB, 0)} MiB |
 | Rscript + survey::rake | ${fmt(theirs.seconds)} s | ${fmt(theirs.peakMiB, 0)} MiB |
 
 speed-up: ${fmt(theirs.seconds / ours.seconds, 1)}x; largest weight difference: ${maxDifference.toExponential(2)}; ` +
   `plumbline converged: ${report.converged} in ${report.iterations} sweeps
 raking alone on aggregated cells: ${fmt(small.ms, 3)} ms for ${(ROWS / 10).toLocaleString('en')} rows (${small.cells} cells), ` +
-  `${fmt(large.ms, 3)} ms for ${ROWS.toLocaleString('en')} rows (${large.cells} cells)`);
+  `${fmt(large.ms, 3)} ms for ${ROWS.toLocaleString('en')} rows (${large.cells} cells)
+start-up, median of 11 runs of \`plumbline posterior\`: ${fmt(startUpLinked, 0)} ms on the PATH, ${fmt(startUpNpx, 0)} ms through npx`);
 if (maxDifference > 1e-6) {
   console.error('weights differ from survey::rake by more than 1e-6');
   process.exitCode = 1;

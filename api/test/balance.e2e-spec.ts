@@ -77,7 +77,7 @@ describe('live balance', () => {
     expect(balance.outcome.weighted).toBeCloseTo(cli.outcome.weighted, 9);
     expect(balance.outcome.unweighted).toBeCloseTo(cli.outcome.unweighted, 12);
     expect(balance.outcome.impliedBiasFactor).toBeCloseTo(cli.outcome.impliedBiasFactor, 9);
-    // The bias factor is defined as odds(u) / (odds(u) + odds(w)) (DESIGN.md, section 3).
+    // The bias factor is defined as odds(u) / (odds(u) + odds(w)) (docs/methods.md, section 6).
     const odds = (p: number) => p / (1 - p);
     const { unweighted: u, weighted: w } = balance.outcome;
     expect(balance.outcome.impliedBiasFactor).toBeCloseTo(odds(u) / (odds(u) + odds(w)), 12);

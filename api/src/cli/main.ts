@@ -1,6 +1,6 @@
-import { run } from './run.js';
+import { runLazily } from './command-loaders.js';
 
-process.exitCode = run(process.argv.slice(2), {
+process.exitCode = await runLazily(process.argv.slice(2), {
   out: (text) => process.stdout.write(text),
   err: (text) => process.stderr.write(text),
 });

@@ -38,6 +38,7 @@ export function betaBinomialTail(k: number, n: number, alpha: number, beta: numb
  * lies, when the truth is learnt from the other polls taken as unbiased. With a Beta(a, b)
  * prior and the others' K successes in N trials the predictive is
  * BetaBinomial(n, a + K, b + N − K) (Gelman et al. 2013, Bayesian Data Analysis, 3rd ed., 2.4).
+ * docs/methods.md, section 9.
  */
 export function chanceOutlierProbability(
   poll: { successes: number; trials: number },

@@ -22,6 +22,7 @@ export interface BetaPosteriorOptions {
  * Conjugate Beta–binomial update (Bayes–Laplace; e.g. Gelman et al. 2013, Bayesian Data
  * Analysis, 3rd ed., section 2.4): k successes in n trials on a Beta(α, β) prior give
  * Beta(α + k, β + n − k). Mean, median and equal-tailed interval from jstat's Beta functions.
+ * docs/methods.md, section 7.
  */
 export function betaPosterior(successes: number, trials: number, options: BetaPosteriorOptions = {}): BetaPosterior {
   const [a, b] = options.prior ?? [1, 1];

@@ -6,7 +6,7 @@ export const expit = (x: number): number => (x >= 0 ? 1 / (1 + Math.exp(-x)) : M
 
 /**
  * Share a source with bias factor b reports for true share p: logit(q) = logit(p) + logit(b)
- * (the odds-ratio form of a constant house effect; b = 0.5 is no bias).
+ * (the odds-ratio form of a constant house effect; b = 0.5 is no bias; docs/methods.md, section 6).
  */
 export function applyBiasFactor(p: number, b: number): number {
   return expit(logit(p) + logit(b));
@@ -39,7 +39,7 @@ export interface ImpliedBiasFactor {
  * interview's influence on logit(u) − logit(w) is taken jointly:
  *   d_i = (y_i − u) / (n·u(1−u)) − w_i (y_i − w) / (Σw · w(1−w)),
  * Var = n/(n−1)·Σ d_i² (with-replacement estimator, weights treated as fixed), and the
- * interval is logit(b) ± z·√Var mapped back through the logistic function.
+ * interval is logit(b) ± z·√Var mapped back through the logistic function (docs/methods.md, section 6).
  */
 export function impliedBiasFactor(cells: readonly OutcomeCell[], level = 0.95): ImpliedBiasFactor {
   if (!(level > 0 && level < 1)) throw new EstimationInputError('level must lie strictly between 0 and 1');

@@ -11,7 +11,7 @@ export interface DesignEffect {
  * Kish's design effect of unequal weighting (Kish 1965, Survey Sampling; restated as 1 + L,
  * L the relvariance of the weights, in Kish 1992, "Weighting for unequal Pi", Journal of
  * Official Statistics 8(2)): deff = n·Σw² / (Σw)², and the
- * effective sample size n / deff. `counts[i]` interviews carry weight `weights[i]`
+ * effective sample size n / deff (docs/methods.md, section 2). `counts[i]` interviews carry weight `weights[i]`
  * (one each when counts are omitted), so aggregated cells give the same answer as rows.
  */
 export function kishDesignEffect(weights: readonly number[], counts?: readonly number[]): DesignEffect {
@@ -36,6 +36,7 @@ export function kishDesignEffect(weights: readonly number[], counts?: readonly n
  * Margin of error of a share at 95%: z·√(deff·p(1−p)/n) with z = 1.96, the usual normal
  * approximation inflated by the design effect (Kish 1965). For quota and other
  * non-probability samples this is a model-based figure, not a sampling guarantee.
+ * docs/methods.md, section 3 (which also says how issue 9 is changing it).
  */
 export function marginOfError(share: number, n: number, designEffect = 1, z = 1.96): number {
   if (!(share >= 0 && share <= 1)) throw new EstimationInputError('share must lie between 0 and 1');

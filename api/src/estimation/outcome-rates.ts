@@ -33,7 +33,7 @@ export type RateName = (typeof RATE_NAMES)[number];
 export type OutcomeRates = { e: number } & Record<RateName, number | null>;
 
 /**
- * Outcome rates of the AAPOR Standard Definitions, 9th edition (2016), "Calculating rates
+ * Outcome rates of the AAPOR Standard Definitions, 9th edition (2016; docs/methods.md, section 10), "Calculating rates
  * from response distributions". The formulas below are written from memory and agree with
  * the cooperation-rate formulas the association restates when correcting its rate
  * calculator (citing AAPOR 2016: 63):

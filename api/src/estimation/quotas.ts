@@ -43,6 +43,7 @@ export function largestRemainder(expected: readonly number[], total: number): nu
  * Quota targets for a total sample size: the interlocked variables form one cross whose cell
  * shares are the products of their shares (independence of the margins); every other variable
  * gets margin quotas. Each set is rounded by largest remainder (see `largestRemainder`).
+ * docs/methods.md, section 5.
  */
 export function allocateQuotas(
   variables: readonly MarginTarget[],

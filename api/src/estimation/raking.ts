@@ -67,6 +67,7 @@ export interface RakingResult {
  * clipped to [floor, cap] (a monotone one-dimensional solve), the bounded raking of
  * Deville and Särndal (1992, "Calibration estimators in survey sampling", JASA 87) in its
  * iterative-proportional form. Bounds that no weights can meet are an input error.
+ * Written down in docs/methods.md, section 1.
  */
 export function rake(
   cells: readonly RakingCell[],

@@ -80,6 +80,7 @@ const PASSES: readonly [number, number][] = [[401, 301], [401, 301], [801, 401],
  * groups are independent), all by the composite trapezoid rule. Grids are re-centred on the
  * posterior mass over several passes, so results are identical on every run.
  * Chance-outlier probabilities use the beta-binomial predictive from all other polls.
+ * docs/methods.md, sections 8 and 9.
  */
 export function reconcile(input: ReconcileInput, options: { level?: number } = {}): Reconciliation {
   const level = options.level ?? 0.95;

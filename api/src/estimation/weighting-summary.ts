@@ -35,7 +35,7 @@ export interface WeightingSummary {
  * command line alike: raking (Deming and Stephan 1940) to the targets, Kish's design
  * effect and effective sample size of the weights, the weighted outcome share with its
  * margin of error (inflated by the design effect) and the implied bias factor between
- * the unweighted and weighted shares.
+ * the unweighted and weighted shares (docs/methods.md, sections 1 to 3 and 6).
  */
 export function summariseWeighting(
   cells: readonly OutcomeRakingCell[],

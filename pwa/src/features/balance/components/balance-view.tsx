@@ -6,6 +6,7 @@ import { formatClock, formatCount } from '../../../lib/format';
 import { useBalance, type Balance } from '../api/get-balance';
 import { BalanceCautions } from './balance-cautions';
 import { BalanceFigures } from './balance-figures';
+import { FiguresMethods } from './figures-methods';
 import { HeadlineShare } from './headline-share';
 import { SampleMix } from './sample-mix';
 
@@ -84,6 +85,7 @@ function BalanceContent({ balance, targetSize, checkedAt }: { balance: Balance; 
       </section>
 
       <BalanceCautions />
+      <FiguresMethods />
     </>
   );
 }

@@ -1,5 +1,5 @@
 // How the balance figures are put into words. Shares are proportions in the code and
-// percentages on screen (DESIGN.md section 3).
+// percentages on screen (docs/methods.md, introduction).
 import { formatDecimal, formatPercent } from '../../../lib/format';
 
 /** A margin of error (a proportion) → "±4.8 pts" (percentage points). */

@@ -1,0 +1,35 @@
+import './figures-methods.css';
+
+/**
+ * "How these figures are worked out": a short, folded summary on the balance page. The full
+ * text, with formulas, published sources and when a figure is withheld, is docs/methods.md in
+ * the repository; the app does not serve the repository's documents, so it names the file.
+ */
+export function FiguresMethods() {
+  return (
+    <details className="pl-methods">
+      <summary>How these figures are worked out</summary>
+      <ul>
+        <li>
+          The weights come from raking (Deming and Stephan 1940): the completes are weighted, variable by
+          variable, until every category’s weighted share meets its population target.
+        </li>
+        <li>
+          The design effect is Kish’s n·Σw² / (Σw)², the cost of weighting; the effective sample size is the
+          number of completes divided by it.
+        </li>
+        <li>
+          The implied bias factor compares the odds of the unweighted and weighted headline shares: 0.5 means
+          no pull. It is measured against the weighted figure, not against the truth.
+        </li>
+        <li>
+          The margin of error and the bias factor’s interval are model-based figures for a quota sample.
+        </li>
+      </ul>
+      <p className="pl-small">
+        Every formula, its published source, what it assumes and when a figure is withheld: <code>docs/methods.md</code>{' '}
+        in Plumbline’s source repository.
+      </p>
+    </details>
+  );
+}
