@@ -8,7 +8,7 @@ cd "$ROOT"
 ensure_node_modules
 ensure_postgres_running
 [[ -x /usr/bin/chromium ]] || apt_install chromium
-[[ -x /usr/bin/Rscript ]] && Rscript -e 'library(survey)' >/dev/null 2>&1 || apt_install r-cran-survey
+[[ -x /usr/bin/Rscript ]] && Rscript -e 'library(survey); library(MASS)' >/dev/null 2>&1 || apt_install r-cran-survey r-cran-mass
 /usr/bin/python3 -c 'import scipy' >/dev/null 2>&1 || apt_install python3-scipy
 
 TEST_DB="${PLUMBLINE_TEST_DB:-plumbline_test}"

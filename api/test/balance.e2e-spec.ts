@@ -77,6 +77,12 @@ describe('live balance', () => {
     expect(balance.outcome.weighted).toBeCloseTo(cli.outcome.weighted, 9);
     expect(balance.outcome.unweighted).toBeCloseTo(cli.outcome.unweighted, 12);
     expect(balance.outcome.impliedBiasFactor).toBeCloseTo(cli.outcome.impliedBiasFactor, 9);
+    // The same linearised standard error and Korn–Graubard interval of the weighted share.
+    expect(balance.outcome.standardError).toBeCloseTo(cli.outcome.standardError, 9);
+    expect(balance.outcome.interval[0]).toBeCloseTo(cli.outcome.interval[0], 9);
+    expect(balance.outcome.interval[1]).toBeCloseTo(cli.outcome.interval[1], 9);
+    expect(balance.outcome.method).toBe(cli.outcome.method);
+    expect(balance.outcome.marginOfError).toBeCloseTo(1.96 * balance.outcome.standardError, 12);
     // The bias factor is defined as odds(u) / (odds(u) + odds(w)) (docs/methods.md, section 6).
     const odds = (p: number) => p / (1 - p);
     const { unweighted: u, weighted: w } = balance.outcome;

@@ -81,7 +81,7 @@ describe("supervisor's quota board", () => {
 interface BalanceBody {
   designEffect: number;
   effectiveSampleSize: number;
-  outcome: { unweighted: number; weighted: number; marginOfError: number; impliedBiasFactor: number; impliedBiasFactorInterval: [number, number] };
+  outcome: { unweighted: number; weighted: number; interval: [number, number]; marginOfError: number; impliedBiasFactor: number; impliedBiasFactorInterval: [number, number] };
 }
 
 describe("lead's balance", () => {
@@ -96,7 +96,11 @@ describe("lead's balance", () => {
 
     expect(await figure(page, 'Weighting figures', 'Design effect').textContent()).toBe(balance.designEffect.toFixed(2));
     expect(await figure(page, 'Weighting figures', 'Effective sample size').textContent()).toBe(String(Math.round(balance.effectiveSampleSize)));
-    expect(await figure(page, 'Weighting figures', 'Margin of error (95%)').textContent()).toBe(`±${(balance.outcome.marginOfError * 100).toFixed(1)} pts`);
+    const [lower, upper] = balance.outcome.interval;
+    expect(await figure(page, 'Weighting figures', 'Weighted share, 95% interval').textContent())
+      .toBe(`${(lower * 100).toFixed(1)}% – ${(upper * 100).toFixed(1)}%`);
+    // The demo's headline share is near one half, where the interval is near symmetric and a ± is shown.
+    expect(await figure(page, 'Weighting figures', 'Margin of error (95%)').textContent()).toBe(`±${(((upper - lower) / 2) * 100).toFixed(1)} pts`);
     expect(await figure(page, 'Headline figures', 'Implied bias factor').textContent()).toBe(balance.outcome.impliedBiasFactor.toFixed(3));
     const [low, high] = balance.outcome.impliedBiasFactorInterval;
     expect(await figure(page, 'Headline figures', 'Its 95% interval').textContent()).toBe(`${low.toFixed(3)} – ${high.toFixed(3)}`);

@@ -35,13 +35,35 @@ cat(format(c(plogis(centre), plogis(centre - z * se), plogis(centre + z * se), c
     expect(Math.abs((outcome.weighted as number) - (weighted as number))).toBeLessThan(1e-9);
   });
 
-  it('reports the margin of error 1.96·√(deff·p(1−p)/n) with Kish\'s deff from the written weights', () => {
+  it('keeps Kish\'s deff as the cost of weighting and reports marginOfError as 1.96 linearised standard errors', () => {
     const text = readFileSync(join(dir, 'out.csv'), 'utf8').trim().split('\n').slice(1);
     const w = text.map((l) => Number(l.split(',').at(-1)));
     const n = w.length;
     // Kish (1965): deff = n·Σw² / (Σw)², computed here from the output file by hand.
     const deff = (n * w.reduce((s, x) => s + x * x, 0)) / w.reduce((s, x) => s + x, 0) ** 2;
     expect(result.json.designEffect as number).toBeCloseTo(deff, 10);
-    expect(outcome.marginOfError as number).toBeCloseTo(1.96 * Math.sqrt((deff * (outcome.weighted as number) * (1 - (outcome.weighted as number))) / n), 10);
+    // Reference: R survey 4.1 SE(svymean(~y, calibrate(..., calfun = "raking"))) on the demo file's four margins.
+    const out = runR(`
+suppressMessages(library(survey))
+d <- read.csv("${join(demo, 'vellmoor-tram-interviews.csv')}", colClasses = "character")
+d$y <- as.numeric(d$supports_tram)
+t <- read.csv("${join(demo, 'vellmoor-targets.csv')}", colClasses = c("character", "character", "numeric"))
+des <- svydesign(ids = ~1, weights = ~1, data = d)
+f <- ~age_band + sex + region + education
+mm <- model.matrix(f, d)
+pop <- setNames(numeric(ncol(mm)), colnames(mm))
+pop["(Intercept)"] <- nrow(d)
+for (v in unique(t$variable)) {
+  s <- t[t$variable == v, ]
+  for (i in seq_len(nrow(s))) {
+    name <- paste0(v, s$category[i])
+    if (name %in% names(pop)) pop[name] <- s$share[i] / sum(s$share) * nrow(d)
+  }
+}
+cal <- calibrate(des, f, population = pop, calfun = "raking", epsilon = 1e-12, maxit = 500)
+cat(format(SE(svymean(~y, cal)), digits = 17))
+`, dir);
+    expect(Math.abs((outcome.standardError as number) / Number(out) - 1)).toBeLessThan(1e-6);
+    expect(outcome.marginOfError as number).toBeCloseTo(1.96 * (outcome.standardError as number), 12);
   });
 });

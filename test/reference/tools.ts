@@ -10,7 +10,7 @@ import { run } from '../../api/src/cli/run.js';
 
 const RSCRIPT = '/usr/bin/Rscript';
 const PYTHON = '/usr/bin/python3';
-const INSTALL = 'apt-get install -y --no-install-recommends r-cran-survey python3-scipy';
+const INSTALL = 'apt-get install -y --no-install-recommends r-cran-survey r-cran-mass python3-scipy';
 
 export function tempDir(): string {
   return mkdtempSync(join(tmpdir(), 'plumbline-ref-'));

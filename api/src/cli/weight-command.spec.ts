@@ -44,7 +44,11 @@ describe('plumbline weight', () => {
     expect(report.converged).toBe(true);
     expect(report.n).toBe(5);
     expect(report.maxMarginError).toBeLessThanOrEqual(1e-6);
-    expect(Object.keys(report.outcome)).toEqual(['column', 'unweighted', 'weighted', 'marginOfError', 'impliedBiasFactor', 'impliedBiasFactorInterval']);
+    expect(Object.keys(report.outcome)).toEqual(['column', 'unweighted', 'weighted', 'standardError', 'interval', 'method', 'marginOfError',
+      'impliedBiasFactor', 'impliedBiasFactorInterval']);
+    expect(report.outcome.marginOfError).toBeCloseTo(1.96 * report.outcome.standardError, 12);
+    expect(report.outcome.interval[0]).toBeLessThan(report.outcome.weighted);
+    expect(report.outcome.interval[1]).toBeGreaterThan(report.outcome.weighted);
     const [header, ...rows] = readFileSync(path('out.csv'), 'utf8').trim().split('\n');
     expect(header).toBe('id,age,region,supports,weight');
     expect(rows.map((r) => r.split(',').slice(0, 4).join(','))).toEqual(DATA.trim().split('\n').slice(1));

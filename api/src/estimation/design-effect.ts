@@ -31,16 +31,3 @@ export function kishDesignEffect(weights: readonly number[], counts?: readonly n
   const designEffect = (n * sumSquares) / (sum * sum);
   return { n, designEffect, effectiveSampleSize: n / designEffect };
 }
-
-/**
- * Margin of error of a share at 95%: z·√(deff·p(1−p)/n) with z = 1.96, the usual normal
- * approximation inflated by the design effect (Kish 1965). For quota and other
- * non-probability samples this is a model-based figure, not a sampling guarantee.
- * docs/methods.md, section 3 (which also says how issue 9 is changing it).
- */
-export function marginOfError(share: number, n: number, designEffect = 1, z = 1.96): number {
-  if (!(share >= 0 && share <= 1)) throw new EstimationInputError('share must lie between 0 and 1');
-  if (!(n > 0)) throw new EstimationInputError('sample size must be positive');
-  if (!(designEffect >= 1 - 1e-12)) throw new EstimationInputError('design effect must be at least 1');
-  return z * Math.sqrt((designEffect * share * (1 - share)) / n);
-}

@@ -1,6 +1,11 @@
 import { impliedBiasFactor } from './bias-factor.js';
-import { kishDesignEffect, marginOfError } from './design-effect.js';
+import { kishDesignEffect } from './design-effect.js';
+import { linearisedShare } from './linearised-share.js';
 import { rake, type MarginReport, type MarginTarget, type RakingCell, type RakingOptions } from './raking.js';
+import { kornGraubardInterval } from './share-interval.js';
+
+/** z of a two-sided 95% normal interval. */
+const Z95 = 1.96;
 
 /** A raking cell that also carries how many of its interviews answered the outcome with 1. */
 export interface OutcomeRakingCell extends RakingCell {
@@ -10,7 +15,14 @@ export interface OutcomeRakingCell extends RakingCell {
 export interface OutcomeSummary {
   unweighted: number;
   weighted: number;
-  marginOfError: number;
+  /** Standard error of the weighted share, linearised through the raking; null below two interviews. */
+  standardError: number | null;
+  /** Korn–Graubard 95% interval [lower, upper] of the weighted share; null below two interviews. */
+  interval: [number, number] | null;
+  /** How standardError and interval were computed. */
+  method: string;
+  /** z × standardError: the ± figure, meaningful only when the interval is near symmetric. */
+  marginOfError: number | null;
   impliedBiasFactor: number | null;
   impliedBiasFactorInterval: [number, number] | null;
 }
@@ -19,7 +31,9 @@ export interface WeightingSummary {
   converged: boolean;
   iterations: number;
   n: number;
+  /** Kish's design effect of the weights: the cost of weighting, not the share's error. */
   designEffect: number;
+  /** Kish's effective sample size n / deff: the cost of weighting. */
   effectiveSampleSize: number;
   weightMin: number;
   weightMax: number;
@@ -33,9 +47,10 @@ export interface WeightingSummary {
 /**
  * Everything a lead reads off a weighting run, computed one way for the API and the
  * command line alike: raking (Deming and Stephan 1940) to the targets, Kish's design
- * effect and effective sample size of the weights, the weighted outcome share with its
- * margin of error (inflated by the design effect) and the implied bias factor between
- * the unweighted and weighted shares (docs/methods.md, sections 1 to 3 and 6).
+ * effect and effective sample size of the weights (the cost of weighting), the weighted
+ * outcome share with its standard error linearised through the raking and its Korn–Graubard
+ * interval, and the implied bias factor between the unweighted and weighted shares
+ * (docs/methods.md, sections 1 to 3 and 6).
  */
 export function summariseWeighting(
   cells: readonly OutcomeRakingCell[],
@@ -62,13 +77,39 @@ export function summariseWeighting(
   };
   if (withOutcome) {
     const bias = impliedBiasFactor(cells.map((c, j) => ({ count: c.count, successes: c.successes, weight: weights[j] as number })));
+    const error = shareError(cells, targets, weights, deff.effectiveSampleSize);
     summary.outcome = {
       unweighted: bias.unweighted,
       weighted: bias.weighted,
-      marginOfError: marginOfError(bias.weighted, deff.n, deff.designEffect),
+      ...error,
       impliedBiasFactor: bias.factor,
       impliedBiasFactorInterval: bias.lower === null || bias.upper === null ? null : [bias.lower, bias.upper],
     };
   }
   return summary;
+}
+
+export const SHARE_METHOD =
+  'standard error linearised through the raking (Deville and Särndal 1992); ' +
+  'interval Korn and Graubard (1998) Clopper–Pearson on the effective sample size; ' +
+  'for quota samples a model-based figure';
+
+function shareError(
+  cells: readonly OutcomeRakingCell[],
+  targets: readonly MarginTarget[],
+  weights: readonly number[],
+  kishSize: number,
+): Pick<OutcomeSummary, 'standardError' | 'interval' | 'method' | 'marginOfError'> {
+  const used = cells.filter((c) => c.count > 0);
+  if (used.reduce((s, c) => s + c.count, 0) < 2) return { standardError: null, interval: null, method: SHARE_METHOD, marginOfError: null };
+  const index = targets.map((t) => new Map(t.shares.map((s, i) => [s.category, i])));
+  const { share, standardError } = linearisedShare(cells.map((c, j) => ({
+    levels: targets.map((t, v) => index[v]?.get(c.categories[t.variable] as string) as number),
+    count: c.count,
+    successes: c.successes,
+    baseWeight: c.baseWeight ?? 1,
+    weight: weights[j] as number,
+  })));
+  const { lower, upper } = kornGraubardInterval(share, standardError, kishSize);
+  return { standardError, interval: [lower, upper], method: SHARE_METHOD, marginOfError: Z95 * standardError };
 }

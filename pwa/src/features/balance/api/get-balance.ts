@@ -16,7 +16,13 @@ export interface BalanceOutcome {
   column: string;
   unweighted: number;
   weighted?: number;
-  marginOfError?: number;
+  /** Standard error of the weighted share, linearised through the raking. */
+  standardError?: number | null;
+  /** Korn–Graubard 95% interval of the weighted share. */
+  interval?: [number, number] | null;
+  method?: string;
+  /** 1.96 standard errors; shown only when the interval is near symmetric. */
+  marginOfError?: number | null;
   impliedBiasFactor?: number | null;
   impliedBiasFactorInterval?: [number, number] | null;
 }

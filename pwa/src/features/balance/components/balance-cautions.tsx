@@ -5,8 +5,9 @@ export function BalanceCautions() {
       <h2 id="pl-cautions-heading">Read these figures with care</h2>
       <ul>
         <li>
-          This is a quota sample, not a probability sample. The margin of error and the interval of the bias factor are
-          model-based figures under assumptions about the sample, not a sampling guarantee.
+          This is a quota sample, not a probability sample. The weighted share’s interval (shown with a ± only when it is
+          near symmetric) and the interval of the bias factor are model-based figures under assumptions about the sample,
+          not a sampling guarantee. Design effect and effective sample size are the cost of weighting, not the share’s error.
         </li>
         <li>
           Respondent privacy: Plumbline keeps no names, addresses or phone numbers of respondents, only their cells,

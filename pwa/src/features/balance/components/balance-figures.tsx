@@ -1,10 +1,15 @@
 import { formatCount, formatDecimal } from '../../../lib/format';
 import type { Balance } from '../api/get-balance';
-import { formatMarginOfError } from './balance-words';
+import { formatMarginOfError, formatShareInterval, symmetricHalfWidth } from './balance-words';
 
-/** The weighting's cost in precision: design effect, effective sample size, margin of error. */
+/**
+ * The weighting's cost in precision (Kish's design effect and effective sample size) and the
+ * weighted share's own 95% interval, with a ± figure only when the interval is near symmetric.
+ */
 export function BalanceFigures({ balance }: { balance: Balance }) {
-  const moe = balance.outcome?.marginOfError;
+  const outcome = balance.outcome;
+  const interval = outcome?.interval ?? null;
+  const halfWidth = interval && outcome?.weighted !== undefined ? symmetricHalfWidth(outcome.weighted, interval) : null;
   return (
     <dl className="pl-figures" aria-label="Weighting figures">
       <div>
@@ -22,9 +27,15 @@ export function BalanceFigures({ balance }: { balance: Balance }) {
         </dd>
       </div>
       <div>
-        <dt>Margin of error (95%)</dt>
-        <dd className="pl-figure">{moe === undefined ? '—' : formatMarginOfError(moe)}</dd>
+        <dt>Weighted share, 95% interval</dt>
+        <dd className="pl-figure">{interval ? formatShareInterval(interval) : '—'}</dd>
       </div>
+      {halfWidth === null ? null : (
+        <div>
+          <dt>Margin of error (95%)</dt>
+          <dd className="pl-figure">{formatMarginOfError(halfWidth)}</dd>
+        </div>
+      )}
     </dl>
   );
 }

@@ -7,6 +7,23 @@ export function formatMarginOfError(moe: number): string {
   return `±${(moe * 100).toFixed(1)} pts`;
 }
 
+/** A share's interval → "44.0% – 52.1%". */
+export function formatShareInterval([lower, upper]: [number, number]): string {
+  return `${formatPercent(lower)} – ${formatPercent(upper)}`;
+}
+
+/**
+ * The ± figure of a share's interval, only when its two half-widths are within 10% of each
+ * other (the same rule as the server's symmetricHalfWidth); null for a lopsided interval.
+ */
+export function symmetricHalfWidth(share: number, [lower, upper]: [number, number]): number | null {
+  const below = share - lower;
+  const above = upper - share;
+  const larger = Math.max(below, above);
+  if (!(larger > 0)) return null;
+  return Math.abs(below - above) <= 0.1 * larger ? (below + above) / 2 : null;
+}
+
 /** A bias factor → three decimals, e.g. "0.503". */
 export function formatBiasFactor(b: number): string {
   return formatDecimal(b, 3);

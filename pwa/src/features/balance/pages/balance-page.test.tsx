@@ -27,6 +27,9 @@ const weighted = {
     column: 'headline',
     unweighted: 0.48282828282828283,
     weighted: 0.48029854409059053,
+    standardError: 0.0246523809728509,
+    interval: [0.4320498, 0.5286012],
+    method: 'standard error linearised through the raking; interval Korn and Graubard (1998)',
     marginOfError: 0.04831866670678792,
     impliedBiasFactor: 0.5025331666981944,
     impliedBiasFactorInterval: [0.48253690304233116, 0.5225213303235445],
@@ -71,6 +74,7 @@ describe("lead's balance page", () => {
     await screen.findByText('Design effect');
     expect(figure('Weighting figures', 'Design effect')).toBe('1.21');
     expect(figure('Weighting figures', 'Effective sample size')).toBe('411');
+    expect(figure('Weighting figures', 'Weighted share, 95% interval')).toBe('43.2% – 52.9%');
     expect(figure('Weighting figures', 'Margin of error (95%)')).toBe('±4.8 pts');
     expect(figure('Headline figures', 'Yes, unweighted')).toBe('48.3%');
     expect(figure('Headline figures', 'Yes, weighted')).toBe('48.0%');
@@ -83,6 +87,21 @@ describe("lead's balance page", () => {
     const female = within(sex).getByRole('row', { name: /female/ });
     expect(within(female).getAllByRole('cell').map((c) => c.textContent)).toEqual(['51.0%', '59.0%', '+8.0 pts', '51.0%']);
     expectCautions();
+  });
+
+  it('shows the interval of a rare share without a ± figure when the interval is lopsided', async () => {
+    const api = installFakeApi();
+    api.on('GET', '/api/projects', () => json([project]));
+    api.on('GET', '/api/projects/p1/balance', () =>
+      json({ ...weighted, outcome: { ...weighted.outcome, weighted: 0.04, interval: [0.022, 0.066], marginOfError: 0.0196 } }),
+    );
+    await signedInAs('lead');
+    renderApp('/lead/balance');
+
+    await screen.findByText('Weighted share, 95% interval');
+    expect(figure('Weighting figures', 'Weighted share, 95% interval')).toBe('2.2% – 6.6%');
+    expect(within(screen.getByLabelText('Weighting figures')).queryByText('Margin of error (95%)')).toBeNull();
+    expect(screen.getByRole('region', { name: 'Read these figures with care' })).toHaveTextContent(/shown with a ± only when it is near symmetric/);
   });
 
   it('says the raw sample overstates the headline share when the whole interval lies above 0.5', async () => {
