@@ -23,7 +23,13 @@ export function FiguresMethods() {
           no pull. It is measured against the weighted figure, not against the truth.
         </li>
         <li>
-          The margin of error and the bias factor’s interval are model-based figures for a quota sample.
+          The weighted share’s standard error is linearised through the raking (Deville and Särndal 1992); its
+          95% interval is Korn and Graubard’s (1998), and a ± margin is shown only when that interval is near
+          symmetric.
+        </li>
+        <li>
+          The interval, the margin of error and the bias factor’s interval are model-based figures for a quota
+          sample, not sampling guarantees.
         </li>
       </ul>
       <p className="pl-small">
