@@ -68,8 +68,9 @@ describe('live balance', () => {
     const targets: { variables: { name: string; categories: { label: string; share: number }[] }[] } = (await lead.get(`${base}/targets`)).body;
     const targetsCsv = ['variable,category,share', ...targets.variables.flatMap((v) => v.categories.map((c) => `${v.name},${c.label},${c.share}`))].join('\n');
     writeFileSync(join(dir, 'targets.csv'), `${targetsCsv}\n`);
-    const bin = resolve(import.meta.dirname, '../bin/plumbline.js');
-    const stdout = execFileSync(process.execPath, [bin, 'weight', '--data', join(dir, 'data.csv'), '--targets', join(dir, 'targets.csv'), '--out', join(dir, 'weighted.csv'), '--outcome', 'headline'], { encoding: 'utf8' });
+    // The source under test, not a build that may be older than it.
+    const source = resolve(import.meta.dirname, '../src/cli/main.ts');
+    const stdout = execFileSync(process.execPath, ['--import', 'tsx', source, 'weight', '--data', join(dir, 'data.csv'), '--targets', join(dir, 'targets.csv'), '--out', join(dir, 'weighted.csv'), '--outcome', 'headline'], { encoding: 'utf8' });
     const cli = JSON.parse(stdout);
     expect(readFileSync(join(dir, 'weighted.csv'), 'utf8').trim().split('\n')).toHaveLength(401);
     expect(balance.designEffect).toBeCloseTo(cli.designEffect, 9);
