@@ -8,6 +8,7 @@ import type { ProjectRow } from '../database/tables.js';
 import { EstimationInputError } from '../estimation/errors.js';
 import type { MarginTarget } from '../estimation/raking.js';
 import { summariseWeighting, type OutcomeRakingCell, type OutcomeSummary } from '../estimation/weighting-summary.js';
+import type { WithheldFigure } from '../estimation/withheld.js';
 import { loadActiveTargets } from '../quotas/cell-allocator.js';
 
 export interface BalanceMargin {
@@ -36,6 +37,8 @@ export interface Balance {
   outcome: (Partial<OutcomeSummary> & { column: string; unweighted: number }) | null;
   /** Why no weights could be computed yet, in words for the lead; null when they were. */
   weightingProblem: string | null;
+  /** Figures not given because they cannot be trusted, each with its reason (docs/methods.md, section 4). */
+  withheld: WithheldFigure[];
   computedAt: string;
 }
 
@@ -89,12 +92,13 @@ export class BalanceService {
       ),
       outcome: n > 0 ? { column: 'headline', unweighted: yes / n } : null,
       weightingProblem: null,
+      withheld: [],
       computedAt: new Date().toISOString(),
     };
     const problem = this.weightingProblem(targets, base.margins, n);
     if (problem) return { ...base, weightingProblem: problem };
     try {
-      const summary = summariseWeighting(cells, targets);
+      const summary = summariseWeighting(cells, targets, {}, true, await this.emptyInterlockedCells(project.id, cells, labelOf));
       return {
         ...base,
         converged: summary.converged,
@@ -106,11 +110,27 @@ export class BalanceService {
         maxMarginError: summary.maxMarginError,
         margins: summary.margins,
         outcome: summary.outcome ? { column: 'headline', ...summary.outcome } : base.outcome,
+        withheld: summary.withheld,
       };
     } catch (error) {
       if (error instanceof EstimationInputError) return { ...base, weightingProblem: error.message };
       throw error;
     }
+  }
+
+  /** Labels of interlocked cells with a target that no counted interview falls in. */
+  private async emptyInterlockedCells(
+    projectId: string,
+    cells: OutcomeRakingCell[],
+    labelOf: Map<string, { variable: string; label: string }>,
+  ): Promise<string[]> {
+    const interlocked = await this.db('quota_cells').where({ project_id: projectId, kind: 'interlocked' }).where('target', '>', 0).select('label', 'category_ids');
+    return interlocked
+      .filter((cell) => {
+        const wanted = cell.category_ids.map((id) => labelOf.get(id)).filter((x) => x !== undefined);
+        return !cells.some((c) => c.count > 0 && wanted.every((w) => c.categories[w.variable] === w.label));
+      })
+      .map((cell) => cell.label);
   }
 
   private weightingProblem(targets: MarginTarget[], margins: BalanceMargin[], n: number): string | null {

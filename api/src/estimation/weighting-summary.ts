@@ -3,6 +3,7 @@ import { kishDesignEffect } from './design-effect.js';
 import { linearisedShare } from './linearised-share.js';
 import { rake, type MarginReport, type MarginTarget, type RakingCell, type RakingOptions } from './raking.js';
 import { kornGraubardInterval } from './share-interval.js';
+import { withheldFigures, withholdingReasons, type WithheldFigure } from './withheld.js';
 
 /** z of a two-sided 95% normal interval. */
 const Z95 = 1.96;
@@ -42,6 +43,8 @@ export interface WeightingSummary {
   /** Weight of each interview in cell i (mean 1 over interviews). */
   weights: number[];
   outcome?: OutcomeSummary;
+  /** Figures not given because they cannot be trusted, each with the reason (docs/methods.md, section 4). */
+  withheld: WithheldFigure[];
 }
 
 /**
@@ -57,6 +60,7 @@ export function summariseWeighting(
   targets: readonly MarginTarget[],
   options: RakingOptions = {},
   withOutcome = true,
+  emptyInterlockedCells: readonly string[] = [],
 ): WeightingSummary {
   const result = rake(cells, targets, options);
   const weights = result.weights;
@@ -74,6 +78,7 @@ export function summariseWeighting(
     maxMarginError: result.maxMarginError,
     margins: result.margins,
     weights,
+    withheld: [],
   };
   if (withOutcome) {
     const bias = impliedBiasFactor(cells.map((c, j) => ({ count: c.count, successes: c.successes, weight: weights[j] as number })));
@@ -85,6 +90,10 @@ export function summariseWeighting(
       impliedBiasFactor: bias.factor,
       impliedBiasFactorInterval: bias.lower === null || bias.upper === null ? null : [bias.lower, bias.upper],
     };
+    summary.withheld = withheldFigures(
+      withholdingReasons({ ...result, effectiveSampleSize: deff.effectiveSampleSize, cells, targets, emptyInterlockedCells }),
+    );
+    for (const { figure } of summary.withheld) summary.outcome[figure] = null;
   }
   return summary;
 }

@@ -43,6 +43,8 @@ export interface Balance {
   outcome: BalanceOutcome | null;
   /** Why weights cannot be computed yet, in a sentence for the reader; null when they were. */
   weightingProblem: string | null;
+  /** Figures not given because they cannot be trusted, each with the reason (absent from older servers). */
+  withheld?: { figure: string; reason: string }[];
   computedAt: string;
 }
 

@@ -10,6 +10,7 @@ export function HeadlineShare({ balance }: { balance: Balance }) {
   }
   const interval = outcome.impliedBiasFactorInterval ?? null;
   const b = outcome.impliedBiasFactor ?? null;
+  const withheld = balance.withheld?.some((w) => w.figure === 'impliedBiasFactorInterval') ?? false;
   return (
     <>
       <p className="pl-headline-question">“{balance.headlineQuestion}”</p>
@@ -29,7 +30,7 @@ export function HeadlineShare({ balance }: { balance: Balance }) {
         <div>
           <dt>Its 95% interval</dt>
           <dd className="pl-figure">
-            {interval ? `${formatBiasFactor(interval[0])} – ${formatBiasFactor(interval[1])}` : '—'}
+            {interval ? `${formatBiasFactor(interval[0])} – ${formatBiasFactor(interval[1])}` : withheld ? 'Withheld' : '—'}
           </dd>
         </div>
       </dl>

@@ -149,4 +149,26 @@ describe("client's progress page", () => {
     expect(screen.queryByRole('link', { name: /export|download/i })).not.toBeInTheDocument();
     expect(api.calls.map((c) => c.path)).not.toContain('/api/projects/p1/quota-board');
   });
+
+  it('shows a withheld figure as withheld, with the reason in its place', async () => {
+    const reason = 'the effective sample size is 22.0, under 30; region: Tarnholm has 3 interviews, fewer than 5';
+    const thin = {
+      ...weighted,
+      n: 26,
+      effectiveSampleSize: 22,
+      outcome: { ...weighted.outcome, standardError: null, interval: null, marginOfError: null, impliedBiasFactorInterval: null },
+      withheld: ['standardError', 'interval', 'marginOfError', 'impliedBiasFactorInterval'].map((figure) => ({ figure, reason })),
+    };
+    const api = installFakeApi();
+    api.on('GET', '/api/projects', () => json([project]));
+    api.on('GET', '/api/projects/p1/balance', () => json(thin));
+    await signedInAs('lead');
+    renderApp('/lead/balance');
+
+    await screen.findByText('Design effect');
+    expect(figure('Weighting figures', 'Weighted share, 95% interval')).toBe('Withheld');
+    expect(screen.queryByText('Margin of error (95%)')).not.toBeInTheDocument();
+    expect(figure('Headline figures', 'Its 95% interval')).toBe('Withheld');
+    expect(screen.getByRole('note')).toHaveTextContent(`withheld because ${reason}.`);
+  });
 });
