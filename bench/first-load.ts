@@ -15,10 +15,8 @@
  * It uses its own database (plumbline_bench_ui), recreated on every run.
  */
 import { execFileSync, spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { chromium } from 'playwright-core';
+import { openBrowser, PHONE } from '../test/browser/browser.js';
 import { migrateLatest } from '../scripts/migrate.js';
 
 const root = resolve(import.meta.dirname, '..');
@@ -33,15 +31,8 @@ function databaseUrl(): string {
 }
 
 async function coldVisit(): Promise<{ formMs: number; logMs: number; jsBytes: number }> {
-  const dir = mkdtempSync(join(tmpdir(), 'plumbline-bench-'));
-  const context = await chromium.launchPersistentContext(dir, {
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    headless: true,
-    viewport: { width: 360, height: 640 },
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
+  const { context, page, close } = await openBrowser(PHONE);
   try {
-    const page = context.pages()[0] ?? (await context.newPage());
     const cdp = await context.newCDPSession(page);
     await cdp.send('Network.enable');
     await cdp.send('Network.emulateNetworkConditions', SLOW_4G);
@@ -62,8 +53,7 @@ async function coldVisit(): Promise<{ formMs: number; logMs: number; jsBytes: nu
     await page.waitForTimeout(Math.max(0, 30_000 - (Date.now() - started)));
     return { formMs, logMs, jsBytes };
   } finally {
-    await context.close();
-    rmSync(dir, { recursive: true, force: true });
+    await close();
   }
 }
 

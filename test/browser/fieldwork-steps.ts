@@ -12,9 +12,13 @@ export async function tokenFor(baseUrl: string, email: string): Promise<{ token:
   return { token: body.accessToken, userId: body.user.id };
 }
 
-export async function api<T>(baseUrl: string, token: string, path: string, method = 'GET'): Promise<T> {
-  const response = await fetch(`${baseUrl}/api${path}`, { method, headers: { Authorization: `Bearer ${token}` } });
-  if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}`);
+export async function api<T>(baseUrl: string, token: string, path: string, method = 'GET', body?: unknown): Promise<T> {
+  const response = await fetch(`${baseUrl}/api${path}`, {
+    method,
+    headers: { Authorization: `Bearer ${token}`, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}: ${await response.text()}`);
   return (await response.json()) as T;
 }
 

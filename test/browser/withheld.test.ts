@@ -4,7 +4,7 @@
 import { randomUUID } from 'node:crypto';
 import { afterEach, describe, expect, inject, it } from 'vitest';
 import { DESKTOP, openBrowser, screenshot, signIn, type Browser } from './browser.js';
-import { tokenFor } from './fieldwork-steps.js';
+import { api, tokenFor } from './fieldwork-steps.js';
 
 const baseUrl = inject('baseUrl');
 let browser: Browser | undefined;
@@ -13,32 +13,20 @@ afterEach(async () => {
   browser = undefined;
 });
 
-async function send<T>(token: string, method: string, path: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${baseUrl}/api${path}`, {
-    method,
-    headers: { Authorization: `Bearer ${token}`, 'Content-Type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}: ${await response.text()}`);
-  return (await response.json()) as T;
-}
-
 describe('withheld figures on the balance page', () => {
   it('shows "Withheld" and the reason where the intervals would be', async () => {
     const lead = await tokenFor(baseUrl, 'lead@vellmoor.example');
     const interviewer = await tokenFor(baseUrl, 'interviewer@vellmoor.example');
-    const project = await send<{ id: string }>(lead.token, 'POST', '/projects', {
+    const project = await api<{ id: string }>(baseUrl, lead.token, '/projects', 'POST', {
       name: 'Vellmoor library hours pilot', fieldStart: '2026-11-16', fieldEnd: '2026-12-06', targetSize: 40,
       headlineQuestion: 'Should the libraries open on Sundays?',
     });
-    const targets = await send<{ variables: { id: string; name: string; categories: { id: string; label: string }[] }[] }>(
-      lead.token, 'PUT', `/projects/${project.id}/targets`,
-      { variables: [
+    const targets = await api<{ variables: { id: string; name: string; categories: { id: string; label: string }[] }[] }>(baseUrl, lead.token, `/projects/${project.id}/targets`, 'PUT', { variables: [
         { name: 'sex', categories: [{ label: 'female', share: 0.5 }, { label: 'male', share: 0.5 }] },
         { name: 'area', categories: [{ label: 'town', share: 0.6 }, { label: 'country', share: 0.4 }] },
       ] },
     );
-    await send(lead.token, 'PUT', `/projects/${project.id}/members`, { userIds: [interviewer.userId] });
+    await api(baseUrl, lead.token, `/projects/${project.id}/members`, 'PUT', { userIds: [interviewer.userId] });
     const id = (variable: string, label: string) => {
       const v = targets.variables.find((x) => x.name === variable)!;
       return [v.id, v.categories.find((c) => c.label === label)!.id] as const;
@@ -53,10 +41,10 @@ describe('withheld figures on the balance page', () => {
       ...Array.from({ length: 3 }, (_, i) => respondent('female', 'country', i === 0)),
     ];
     try {
-      await send(interviewer.token, 'POST', `/projects/${project.id}/interviews/sync`, { interviews });
+      await api(baseUrl, interviewer.token, `/projects/${project.id}/interviews/sync`, 'POST', { interviews });
     } finally {
       // The demo interviewer's phone screens in other tests show the tram project only.
-      await send(lead.token, 'PUT', `/projects/${project.id}/members`, { userIds: [] });
+      await api(baseUrl, lead.token, `/projects/${project.id}/members`, 'PUT', { userIds: [] });
     }
 
     browser = await openBrowser(DESKTOP);

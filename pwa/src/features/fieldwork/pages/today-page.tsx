@@ -54,7 +54,7 @@ export function TodayPage() {
       </PageFrame>
     );
   }
-  if (field && openDraft && draft !== undefined) {
+  if (field && openDraft) {
     return (
       <PageFrame title="Today">
         <DraftPrompt
