@@ -45,7 +45,7 @@ describe('plumbline weight', () => {
     expect(report.n).toBe(5);
     expect(report.maxMarginError).toBeLessThanOrEqual(1e-6);
     expect(Object.keys(report.outcome)).toEqual(['column', 'unweighted', 'weighted', 'standardError', 'interval', 'method', 'marginOfError',
-      'impliedBiasFactor', 'impliedBiasFactorInterval']);
+      'impliedBiasFactor', 'impliedBiasFactorInterval', 'impliedBiasFactorMethod']);
     // Five interviews: the share's uncertainty is withheld, with its reasons (docs/methods.md, section 4).
     expect(report.outcome).toMatchObject({ standardError: null, interval: null, marginOfError: null, impliedBiasFactorInterval: null });
     expect(report.withheld.map((w: { figure: string }) => w.figure)).toEqual(['standardError', 'interval', 'marginOfError', 'impliedBiasFactorInterval']);

@@ -1,5 +1,6 @@
 import { jStat } from './jstat.js';
 import { EstimationInputError } from './errors.js';
+import { withReplacementVariance, type CellInfluence } from './linearised-share.js';
 
 export const logit = (p: number): number => Math.log(p / (1 - p));
 export const expit = (x: number): number => (x >= 0 ? 1 / (1 + Math.exp(-x)) : Math.exp(x) / (1 + Math.exp(x)));
@@ -12,11 +13,16 @@ export function applyBiasFactor(p: number, b: number): number {
   return expit(logit(p) + logit(b));
 }
 
-/** Interviews in one weighting cell: how many, how many answered 1, and each one's weight. */
+/** Interviews in one weighting cell: how many, and how many answered 1. */
 export interface OutcomeCell {
   count: number;
   successes: number;
-  weight: number;
+}
+
+/** The weighted share and each cell's influence on it, linearised through the raking (linearisedShare). */
+export interface CalibratedShare {
+  share: number;
+  influence: readonly CellInfluence[];
 }
 
 export interface ImpliedBiasFactor {
@@ -34,41 +40,47 @@ export interface ImpliedBiasFactor {
  * Implied bias factor of a running sample: b = odds(u) / (odds(u) + odds(w)), u the
  * unweighted and w the weighted share, i.e. logit(b) = logit(u) − logit(w).
  *
- * Interval: delta method (Taylor linearisation, as in Wolter 2007, Introduction to Variance
- * Estimation, ch. 6) on logit(b). Both shares come from the same interviews, so each
- * interview's influence on logit(u) − logit(w) is taken jointly:
- *   d_i = (y_i − u) / (n·u(1−u)) − w_i (y_i − w) / (Σw · w(1−w)),
- * Var = n/(n−1)·Σ d_i² (with-replacement estimator, weights treated as fixed), and the
- * interval is logit(b) ± z·√Var mapped back through the logistic function (docs/methods.md, section 6).
+ * Interval: delta method (Taylor linearisation, Wolter 2007, Introduction to Variance
+ * Estimation, ch. 6) on logit(b), with both shares' influences taken jointly because they
+ * come from the same interviews:
+ *   d_i = (y_i − u) / (n·u(1−u)) − e_i / (w(1−w)),
+ * e_i the interview's influence on w linearised through the raking (Deville and Särndal
+ * 1992; linearisedShare), not (y_i − w)·weight_i: the raked weights depend on the sample's
+ * mix, and treating them as fixed loses that part of the variance exactly when the sample
+ * is well balanced. Var = n/(n−1)·Σ d_i², the interval logit(b) ± z·√Var mapped back
+ * through the logistic function (docs/methods.md, section 6).
  */
-export function impliedBiasFactor(cells: readonly OutcomeCell[], level = 0.95): ImpliedBiasFactor {
+export function impliedBiasFactor(cells: readonly OutcomeCell[], weighted: CalibratedShare, level = 0.95): ImpliedBiasFactor {
   if (!(level > 0 && level < 1)) throw new EstimationInputError('level must lie strictly between 0 and 1');
+  if (weighted.influence.length !== cells.length) throw new EstimationInputError('one influence per cell is needed');
   let n = 0;
   let k = 0;
-  let sumW = 0;
-  let sumWY = 0;
   for (const c of cells) {
-    if (!(c.count >= 0 && c.successes >= 0 && c.successes <= c.count && c.weight >= 0)) {
-      throw new EstimationInputError('each cell needs 0 ≤ successes ≤ count and a non-negative weight');
+    if (!(c.count >= 0 && c.successes >= 0 && c.successes <= c.count)) {
+      throw new EstimationInputError('each cell needs 0 ≤ successes ≤ count');
     }
     n += c.count;
     k += c.successes;
-    sumW += c.count * c.weight;
-    sumWY += c.successes * c.weight;
   }
-  if (!(n > 1 && sumW > 0)) throw new EstimationInputError('at least two weighted interviews are needed');
+  if (!(n > 1)) throw new EstimationInputError('at least two weighted interviews are needed');
   const u = k / n;
-  const w = sumWY / sumW;
+  const w = weighted.share;
   if (u <= 0 || u >= 1 || w <= 0 || w >= 1) {
     return { unweighted: u, weighted: w, factor: null, lower: null, upper: null, standardError: null };
   }
-  let sumSq = 0;
-  for (const c of cells) {
-    const d1 = (1 - u) / (n * u * (1 - u)) - (c.weight * (1 - w)) / (sumW * w * (1 - w));
-    const d0 = -u / (n * u * (1 - u)) + (c.weight * w) / (sumW * w * (1 - w));
-    sumSq += c.successes * d1 * d1 + (c.count - c.successes) * d0 * d0;
-  }
-  const standardError = Math.sqrt((n / (n - 1)) * sumSq);
+  const influence = cells.map((_, j) => {
+    const e = weighted.influence[j] as CellInfluence;
+    return {
+      yes: (1 - u) / (n * u * (1 - u)) - e.yes / (w * (1 - w)),
+      no: -u / (n * u * (1 - u)) - e.no / (w * (1 - w)),
+    };
+  });
+  const standardError = Math.sqrt(withReplacementVariance(cells, influence));
+  return withInterval(u, w, standardError, level);
+}
+
+/** b with the interval logit(b) ± z·SE mapped back through the logistic function. */
+export function withInterval(u: number, w: number, standardError: number, level = 0.95): ImpliedBiasFactor {
   const centre = logit(u) - logit(w);
   const z = jStat.normal.inv(0.5 + level / 2, 0, 1);
   return {

@@ -12,9 +12,21 @@ export interface CalibratedCell {
   weight: number;
 }
 
+/** Influence of one interview of a cell on the weighted share, for y = 1 and y = 0. */
+export interface CellInfluence {
+  yes: number;
+  no: number;
+}
+
 export interface LinearisedShare {
   share: number;
   standardError: number;
+  /**
+   * Per cell, each interview's linearised influence on the share after calibration
+   * (u_i below, centred to mean 0): what a joint variance with another statistic of the
+   * same interviews needs, such as the implied bias factor.
+   */
+  influence: CellInfluence[];
 }
 
 /**
@@ -78,16 +90,28 @@ export function linearisedShare(cells: readonly CalibratedCell[]): LinearisedSha
 
   // u = w·(z − x'β) takes two values in a cell (y = 1 and y = 0).
   let sum = 0;
+  const raw = cells.map((c, j) => {
+    const fitted = (cellColumns[j] as number[]).reduce((s, a) => s + (beta[a] as number), 0);
+    const yes = c.weight * ((1 - share) / total - fitted);
+    const no = c.weight * (-share / total - fitted);
+    sum += c.successes * yes + (c.count - c.successes) * no;
+    return { yes, no };
+  });
+  const mean = sum / n;
+  const influence = raw.map(({ yes, no }) => ({ yes: yes - mean, no: no - mean }));
+  return { share, standardError: Math.sqrt(withReplacementVariance(cells, influence)), influence };
+}
+
+/** n/(n−1) · Σ u_i² over the interviews of cells whose influences are centred (mean 0). */
+export function withReplacementVariance(cells: readonly { count: number; successes: number }[], influence: readonly CellInfluence[]): number {
+  let n = 0;
   let sumSquares = 0;
   cells.forEach((c, j) => {
-    const fitted = (cellColumns[j] as number[]).reduce((s, a) => s + (beta[a] as number), 0);
-    const u1 = c.weight * ((1 - share) / total - fitted);
-    const u0 = c.weight * (-share / total - fitted);
-    sum += c.successes * u1 + (c.count - c.successes) * u0;
-    sumSquares += c.successes * u1 * u1 + (c.count - c.successes) * u0 * u0;
+    const { yes, no } = influence[j] as CellInfluence;
+    n += c.count;
+    sumSquares += c.successes * yes * yes + (c.count - c.successes) * no * no;
   });
-  const variance = (n / (n - 1)) * Math.max(0, sumSquares - (sum * sum) / n);
-  return { share, standardError: Math.sqrt(variance) };
+  return n > 1 ? (n / (n - 1)) * sumSquares : NaN;
 }
 
 /**

@@ -2,10 +2,11 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { betaBinomialLogPmf, betaBinomialTail } from './beta-binomial.js';
 import { betaPosterior } from './beta-posterior.js';
-import { applyBiasFactor, impliedBiasFactor } from './bias-factor.js';
+import { applyBiasFactor } from './bias-factor.js';
 import { kishDesignEffect } from './design-effect.js';
 import { outcomeRates } from './outcome-rates.js';
 import { reconcile } from './reconcile.js';
+import { summariseWeighting } from './weighting-summary.js';
 
 describe('properties a user relies on', () => {
   it('design effect is at least 1 for any weights', () => {
@@ -33,12 +34,18 @@ describe('properties a user relies on', () => {
   });
 
   it('the implied bias factor is 0.5 when weighting does not move the share, and above 0.5 when the sample overstates', () => {
-    const even = impliedBiasFactor([{ count: 10, successes: 4, weight: 1 }, { count: 10, successes: 4, weight: 2 }]);
-    expect(even.factor).toBeCloseTo(0.5, 12);
-    const over = impliedBiasFactor([{ count: 10, successes: 8, weight: 0.5 }, { count: 10, successes: 2, weight: 1.5 }]);
-    expect(over.factor as number).toBeGreaterThan(0.5);
-    expect(over.lower as number).toBeLessThan(over.factor as number);
-    expect(over.upper as number).toBeGreaterThan(over.factor as number);
+    const sex = (female: number) => [{ variable: 'sex', shares: [{ category: 'f', share: female }, { category: 'm', share: 1 - female }] }];
+    const cells = [{ categories: { sex: 'f' }, count: 100, successes: 60 }, { categories: { sex: 'm' }, count: 100, successes: 30 }];
+    // The sample's own mix as the target: weights stay 1, so u = w and b = 0.5.
+    const even = summariseWeighting(cells, sex(0.5)).outcome!;
+    expect(even.impliedBiasFactor).toBeCloseTo(0.5, 12);
+    // Women, who answer yes more often, are over-represented against a 30% target: the raw sample overstates.
+    const over = summariseWeighting(cells, sex(0.3)).outcome!;
+    expect(over.impliedBiasFactor as number).toBeGreaterThan(0.5);
+    const [lower, upper] = over.impliedBiasFactorInterval as [number, number];
+    expect(lower).toBeLessThan(over.impliedBiasFactor as number);
+    expect(upper).toBeGreaterThan(over.impliedBiasFactor as number);
+    expect(lower).toBeGreaterThan(0.5);
   });
 
   it('a bias factor of b turns a true 50/50 split into a report of b, and 0.5 changes nothing', () => {
