@@ -37,7 +37,7 @@ export function formatBiasFactor(b: number): string {
 export function biasSentence(interval: [number, number], unweighted: number, weighted: number): string {
   const [low, high] = interval;
   const shares = `${formatPercent(unweighted)} before weighting, ${formatPercent(weighted)} after`;
-  if (low > 0.5) return `The raw sample overstates the headline share (${shares}): the whole interval lies above 0.5.`;
-  if (high < 0.5) return `The raw sample understates the headline share (${shares}): the whole interval lies below 0.5.`;
+  if (low > 0.5) return `The raw sample overstates the headline share against the weighted figure (${shares}): the whole interval lies above 0.5.`;
+  if (high < 0.5) return `The raw sample understates the headline share against the weighted figure (${shares}): the whole interval lies below 0.5.`;
   return `No clear pull either way so far (${shares}): the interval includes 0.5.`;
 }

@@ -20,7 +20,10 @@ export function FiguresMethods() {
         </li>
         <li>
           The implied bias factor compares the odds of the unweighted and weighted headline shares: 0.5 means
-          no pull. It is measured against the weighted figure, not against the truth.
+          no pull. It is measured against the weighted figure, not against the truth. Its 95% interval is the
+          delta method with the weighting’s own uncertainty included, or, when fewer than 100 interviews give the less
+          common answer, a jackknife that re-weights the sample with each interview left out; both assume the
+          interviews are a random draw within their quota cells.
         </li>
         <li>
           The weighted share’s standard error is linearised through the raking (Deville and Särndal 1992); its

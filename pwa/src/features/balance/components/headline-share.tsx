@@ -40,7 +40,9 @@ export function HeadlineShare({ balance }: { balance: Balance }) {
       <p className="pl-small pl-muted">
         The implied bias factor is the share the raw sample would show if, after weighting, the answer split 50/50.
         0.5 means the sample’s mix does not pull the headline share at all; above 0.5 the raw sample says “yes” more
-        often than the weighted figure, below 0.5 less often.
+        often than the weighted figure, below 0.5 less often. It is measured against the weighted figure, not
+        against the truth, and its interval assumes the interviews are a random draw within their quota cells, which a
+        quota sample only approximates.
       </p>
     </>
   );

@@ -82,6 +82,8 @@ describe("lead's balance page", () => {
     expect(figure('Headline figures', 'Its 95% interval')).toBe('0.483 – 0.523');
     expect(screen.getByText(/No clear pull either way so far .* the interval includes 0\.5/)).toBeInTheDocument();
     expect(screen.getByText(/0\.5 means the sample’s mix does not pull the headline share/)).toBeInTheDocument();
+    // What the bias factor is measured against, and what its interval assumes (docs/methods.md, section 6).
+    expect(screen.getByText(/not\s+against the truth, and its interval assumes the interviews are a random draw within their quota cells/)).toBeInTheDocument();
 
     const sex = screen.getByRole('table', { name: 'sex: shares' });
     const female = within(sex).getByRole('row', { name: /female/ });
@@ -113,7 +115,7 @@ describe("lead's balance page", () => {
     await signedInAs('lead');
     renderApp('/lead/balance');
 
-    expect(await screen.findByText(/The raw sample overstates the headline share \(56\.0% before weighting, 49\.0% after\)/)).toBeInTheDocument();
+    expect(await screen.findByText(/The raw sample overstates the headline share against the weighted figure \(56\.0% before weighting, 49\.0% after\)/)).toBeInTheDocument();
   });
 
   it('shows why weights are not possible yet, with the sample mix and the cautions', async () => {
