@@ -99,6 +99,15 @@ describe('plumbline quotas', () => {
     expect(out.sets[1].cells.map((c: { target: number }) => c.target)).toEqual([67, 33]);
   });
 
+  it('takes interlocked cells from a joint table, which interlocks its variables by itself', () => {
+    const joint = file('j.csv', 'variable,category,share\nage × sex,young × female,20\nage × sex,young × male,30\nage × sex,old × female,35\nage × sex,old × male,15\nregion,north,2\nregion,south,1\n');
+    const out = JSON.parse(plumbline('quotas', '--targets', joint, '--total', '100').stdout);
+    expect(out.sets.map((s: { variables: string[] }) => s.variables)).toEqual([['age', 'sex'], ['region']]);
+    // The table's own shares (young men 30%), where the product of its margins would give 50% × 45% = 22.5%.
+    expect(out.sets[0].cells.map((c: { target: number }) => c.target)).toEqual([20, 30, 35, 15]);
+    expectRejected(plumbline('quotas', '--targets', joint, '--total', '100', '--interlock', 'age,region'), 'j.csv', 'the joint table interlocks age, sex');
+  });
+
   it('rejects an interlock variable that is not in the targets, and a bad total', () => {
     expectRejected(plumbline('quotas', '--targets', targets, '--total', '100', '--interlock', 'age,edu'), '"edu"', 'q.csv');
     expectRejected(plumbline('quotas', '--targets', targets, '--total', '0'), '--total');

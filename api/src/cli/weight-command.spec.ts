@@ -79,6 +79,23 @@ describe('plumbline weight', () => {
     expect(existsSync(path('out.csv'))).toBe(true);
   });
 
+  it('rakes to a joint table of interlocked variables and reports the margins it implies', () => {
+    const joint = 'variable,category,share\nage × region,young × Harrowby,20\nage × region,young × Mardon,20\nage × region,old × Harrowby,35\nage × region,old × Mardon,25\n';
+    const data = 'id,age,region,supports\n' + Array.from({ length: 40 }, (_, i) =>
+      `${i},${['young', 'old'][i % 2]},${['Harrowby', 'Mardon', 'Mardon'][i % 3]},${i % 5 === 0 ? 1 : 0}`).join('\n') + '\n';
+    const report = JSON.parse(weigh(data, joint, '--outcome', 'supports').stdout);
+    expect(report.converged).toBe(true);
+    const cell = report.margins.find((m: { variable: string; category: string }) => m.variable === 'age × region' && m.category === 'old × Harrowby');
+    expect(cell.weighted).toBeCloseTo(0.35, 6);
+    const young = report.margins.find((m: { variable: string; category: string }) => m.variable === 'age' && m.category === 'young');
+    expect(young).toMatchObject({ target: 0.4, unweighted: 0.5 });
+  });
+
+  it('rejects a margin that disagrees with the joint table by more than 0.5 points, with both figures', () => {
+    const joint = 'variable,category,share\nage × region,young × Harrowby,20\nage × region,young × Mardon,20\nage × region,old × Harrowby,35\nage × region,old × Mardon,25\nage,young,45\nage,old,55\n';
+    expectRejected(weigh(DATA, joint), 'targets.csv', 'variable age category "young": its own target is 45.0% but the joint table age × region gives 40.0%');
+  });
+
   it('rejects an unknown category in the data, naming file, line, variable and category', () => {
     expectRejected(weigh(DATA.replace('3,old,Mardon', '3,old,Mardn'), TARGETS), 'data.csv', 'line 4', 'region', '"Mardn"');
   });

@@ -64,7 +64,7 @@ export function weightCommand(args: string[]): object {
 
 function checkColumns(data: CsvTable, targets: TargetsFile, outcome?: string, baseWeight?: string): void {
   const has = new Set(data.header);
-  for (const t of targets.targets) {
+  for (const t of targets.margins) {
     if (!has.has(t.variable)) {
       const line = targets.lineOf(t.variable, t.shares[0]?.category ?? '');
       throw new CliInputError(`${data.file}: line 1: no column "${t.variable}" (variable in ${targets.file} line ${line})`);
@@ -85,8 +85,8 @@ function checkColumns(data: CsvTable, targets: TargetsFile, outcome?: string, ba
  * so the pass allocates next to nothing per interview.
  */
 function buildCells(data: CsvTable, targets: TargetsFile, outcome?: string, baseWeight?: string): Cells {
-  const variables = targets.targets.map((t) => ({ name: t.variable, index: new Map(t.shares.map((s, i) => [s.category, i])) }));
-  const columns = targets.targets.map((t) => data.header.indexOf(t.variable));
+  const variables = targets.margins.map((t) => ({ name: t.variable, index: new Map(t.shares.map((s, i) => [s.category, i])) }));
+  const columns = targets.margins.map((t) => data.header.indexOf(t.variable));
   const outcomeAt = outcome === undefined ? -1 : columns.push(data.header.indexOf(outcome)) - 1;
   const baseAt = baseWeight === undefined ? -1 : columns.push(data.header.indexOf(baseWeight)) - 1;
   const combinations = variables.reduce((p, v) => p * v.index.size, 1);
@@ -145,7 +145,7 @@ function buildCells(data: CsvTable, targets: TargetsFile, outcome?: string, base
 }
 
 function checkTargetsHaveRespondents(targets: TargetsFile, cells: Cells['cells'], dataFile: string): void {
-  for (const t of targets.targets) {
+  for (const t of targets.margins) {
     const counts = new Map<string, number>();
     for (const c of cells) counts.set(c.categories[t.variable] as string, (counts.get(c.categories[t.variable] as string) ?? 0) + c.count);
     for (const s of t.shares) {

@@ -1,5 +1,7 @@
 import { EstimationInputError } from './errors.js';
 import { normaliseShares } from './raking-cells.js';
+import { JOINT_SEPARATOR } from './joint-names.js';
+import { resolveTargets } from './joint-targets.js';
 import type { MarginTarget } from './raking.js';
 
 export interface QuotaCell {
@@ -41,9 +43,10 @@ export function largestRemainder(expected: readonly number[], total: number): nu
 
 /**
  * Quota targets for a total sample size: the interlocked variables form one cross whose cell
- * shares are the products of their shares (independence of the margins); every other variable
- * gets margin quotas. Each set is rounded by largest remainder (see `largestRemainder`).
- * docs/methods.md, section 5.
+ * shares are the joint table's when one is given (joint-targets.ts) and otherwise the products
+ * of their shares (independence of the margins); every other variable gets margin quotas.
+ * A joint table interlocks its variables by itself. Each set is rounded by largest remainder
+ * (see `largestRemainder`). docs/methods.md, section 5.
  */
 export function allocateQuotas(
   variables: readonly MarginTarget[],
@@ -52,18 +55,39 @@ export function allocateQuotas(
 ): QuotaAllocation {
   if (!(Number.isInteger(total) && total > 0)) throw new EstimationInputError('total must be a whole number above 0');
   if (variables.length === 0) throw new EstimationInputError('no quota variables given');
-  const byName = new Map<string, MarginTarget>();
+  const seen = new Set<string>();
   for (const v of variables) {
-    if (byName.has(v.variable)) throw new EstimationInputError(`variable ${v.variable} is given twice`);
-    byName.set(v.variable, v);
+    if (seen.has(v.variable)) throw new EstimationInputError(`variable ${v.variable} is given twice`);
+    seen.add(v.variable);
   }
-  const interlock = [...(options.interlock ?? [])];
+  const { margins, joint } = resolveTargets(variables);
+  if (joint.length > 1) throw new EstimationInputError(`joint tables are given for ${joint.map((j) => j.variable).join(' and ')}; a project interlocks one set of variables`);
+  const table = joint[0];
+  const byName = new Map(margins.map((m) => [m.variable, m]));
+  let interlock = [...(options.interlock ?? [])];
   if (new Set(interlock).size !== interlock.length) throw new EstimationInputError('interlock names a variable twice');
   for (const name of interlock) if (!byName.has(name)) throw new EstimationInputError(`interlock: variable ${name} is not in the targets`);
+  if (table) {
+    const parts = [...(table.parts ?? [])];
+    if (interlock.length > 0 && (interlock.length !== parts.length || interlock.some((name) => !parts.includes(name)))) {
+      throw new EstimationInputError(`interlock: the joint table interlocks ${parts.join(', ')}; interlock exactly those, or give their margins instead of the table`);
+    }
+    interlock = parts;
+  }
   const sets: QuotaSet[] = [];
-  if (interlock.length > 0) sets.push(allocateSet(interlock.map((name) => byName.get(name) as MarginTarget), total));
-  for (const v of variables) if (!interlock.includes(v.variable)) sets.push(allocateSet([v], total));
+  if (table) sets.push(allocateShares(interlock, crossOf(table), total));
+  else if (interlock.length > 0) sets.push(allocateSet(interlock.map((name) => byName.get(name) as MarginTarget), total));
+  for (const v of margins) if (!interlock.includes(v.variable)) sets.push(allocateSet([v], total));
   return { total, sets };
+}
+
+/** A joint table's cells as category records with their (normalised) shares. */
+function crossOf(table: MarginTarget): { categories: Record<string, string>; share: number }[] {
+  const parts = table.parts ?? [];
+  return table.shares.map((s) => {
+    const values = s.category.split(JOINT_SEPARATOR);
+    return { categories: Object.fromEntries(parts.map((p, v) => [p, values[v] as string])), share: s.share };
+  });
 }
 
 function allocateSet(variables: MarginTarget[], total: number): QuotaSet {
@@ -74,10 +98,14 @@ function allocateSet(variables: MarginTarget[], total: number): QuotaSet {
       v.shares.map((s, i) => ({ categories: { ...cell.categories, [v.variable]: s.category }, share: cell.share * (shares[i] as number) })),
     );
   }
+  return allocateShares(variables.map((v) => v.variable), cells, total);
+}
+
+function allocateShares(variables: string[], cells: { categories: Record<string, string>; share: number }[], total: number): QuotaSet {
   const expected = cells.map((c) => c.share * total);
   const targets = largestRemainder(expected, total);
   return {
-    variables: variables.map((v) => v.variable),
+    variables,
     cells: cells.map((c, i) => ({ categories: c.categories, expected: expected[i] as number, target: targets[i] as number })),
   };
 }

@@ -1,4 +1,5 @@
 import { EstimationInputError } from './errors.js';
+import { categoryOf } from './joint-names.js';
 import type { MarginTarget, RakingCell } from './raking.js';
 
 /** Cells and targets in index form, checked once before raking starts. */
@@ -33,7 +34,7 @@ export function prepare(cells: readonly RakingCell[], targets: readonly MarginTa
     const lv = new Int32Array(cells.length);
     const sample = new Float64Array(t.shares.length);
     cells.forEach((cell, j) => {
-      const category = cell.categories[t.variable];
+      const category = categoryOf(cell.categories, t);
       if (category === undefined) throw new EstimationInputError(`variable ${t.variable} is missing from the interviews`);
       const i = index.get(category);
       if (i === undefined) throw new EstimationInputError(`variable ${t.variable}: category "${category}" has no target`);

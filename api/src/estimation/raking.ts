@@ -13,6 +13,8 @@ export interface CategoryShare {
 export interface MarginTarget {
   variable: string;
   shares: readonly CategoryShare[];
+  /** For a joint table of interlocked variables: the variables whose categories it crosses (joint-targets.ts). */
+  parts?: readonly string[];
 }
 
 /**

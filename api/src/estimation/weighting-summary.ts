@@ -2,6 +2,8 @@ import { impliedBiasFactor, type ImpliedBiasFactor } from './bias-factor.js';
 import { jackknifeBiasFactor } from './bias-factor-jackknife.js';
 import { kishDesignEffect } from './design-effect.js';
 import { linearisedShare, type LinearisedShare } from './linearised-share.js';
+import { categoryOf } from './joint-names.js';
+import { marginOf, resolveTargets } from './joint-targets.js';
 import { rake, type MarginReport, type MarginTarget, type RakingCell, type RakingOptions } from './raking.js';
 import { kornGraubardInterval } from './share-interval.js';
 import { withheldFigures, withholdingReasons, type WithheldFigure } from './withheld.js';
@@ -65,6 +67,8 @@ export function summariseWeighting(
   withOutcome = true,
   emptyInterlockedCells: readonly string[] = [],
 ): WeightingSummary {
+  const { raking, joint } = resolveTargets(targets);
+  targets = raking;
   const result = rake(cells, targets, options);
   const weights = result.weights;
   const counts = cells.map((c) => c.count);
@@ -79,7 +83,7 @@ export function summariseWeighting(
     weightMin: Math.min(...used),
     weightMax: Math.max(...used),
     maxMarginError: result.maxMarginError,
-    margins: result.margins,
+    margins: [...result.margins, ...partMargins(cells, weights, joint)],
     weights,
     withheld: [],
   };
@@ -107,12 +111,25 @@ export const SHARE_METHOD =
   'interval Korn and Graubard (1998) Clopper–Pearson on the effective sample size; ' +
   'for quota samples a model-based figure';
 
+/** The margins of the variables in joint tables, weighted and unweighted, against the table's sums. */
+function partMargins(cells: readonly OutcomeRakingCell[], weights: readonly number[], joint: readonly MarginTarget[]): MarginReport[] {
+  const n = cells.reduce((s, c) => s + c.count, 0);
+  return joint.flatMap((table) => (table.parts ?? []).map((part) => marginOf(table, part)).flatMap((margin) =>
+    margin.shares.map((s) => {
+      const inside = cells.map((c, j) => (c.categories[margin.variable] === s.category ? j : -1)).filter((j) => j >= 0);
+      const count = inside.reduce((t, j) => t + (cells[j]?.count as number), 0);
+      const weighted = inside.reduce((t, j) => t + (cells[j]?.count as number) * (weights[j] as number), 0);
+      return { variable: margin.variable, category: s.category, target: s.share, unweighted: count / n, weighted: weighted / n };
+    }),
+  ));
+}
+
 /** The share linearised through the raking; null below two interviews. */
 function linearise(cells: readonly OutcomeRakingCell[], targets: readonly MarginTarget[], weights: readonly number[]): LinearisedShare | null {
   if (cells.reduce((s, c) => s + c.count, 0) < 2) return null;
   const index = targets.map((t) => new Map(t.shares.map((s, i) => [s.category, i])));
   return linearisedShare(cells.map((c, j) => ({
-    levels: targets.map((t, v) => index[v]?.get(c.categories[t.variable] as string) as number),
+    levels: targets.map((t, v) => index[v]?.get(categoryOf(c.categories, t) as string) as number),
     count: c.count,
     successes: c.successes,
     baseWeight: c.baseWeight ?? 1,

@@ -3,6 +3,7 @@
 // section 4). The thresholds are common practice, not a published standard: an effective
 // sample size under 30 makes normal-theory intervals unreliable, and a category with fewer
 // than 5 interviews makes its weights, and so every interval, hinge on a handful of people.
+import { categoryOf } from './joint-names.js';
 import type { MarginTarget } from './raking.js';
 
 export const MIN_EFFECTIVE_SIZE = 30;
@@ -41,7 +42,7 @@ export function withholdingReasons(input: WithholdingInput): string[] {
   for (const target of input.targets) {
     for (const { category, share } of target.shares) {
       if (share <= 0) continue;
-      const count = input.cells.reduce((s, c) => s + (c.categories[target.variable] === category ? c.count : 0), 0);
+      const count = input.cells.reduce((s, c) => s + (categoryOf(c.categories, target) === category ? c.count : 0), 0);
       if (count < MIN_CATEGORY_INTERVIEWS) {
         reasons.push(`${target.variable}: ${category} has ${count} ${count === 1 ? 'interview' : 'interviews'}, fewer than ${MIN_CATEGORY_INTERVIEWS}`);
       }

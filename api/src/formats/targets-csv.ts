@@ -1,6 +1,8 @@
-// Population targets as text: `variable,category,share`, one category a line. Shared by
-// the API (uploaded files) and the `plumbline` command line (files on disk).
+// Population targets as text: `variable,category,share`, one category a line; a variable
+// written "age band × sex" with categories "18-24 × female" gives joint shares of interlocked
+// variables. Shared by the API (uploaded files) and the `plumbline` command line (files on disk).
 import { parse } from 'csv-parse/sync';
+import { JOINT_SEPARATOR } from '../estimation/joint-names.js';
 import { parseNumber } from './numbers.js';
 
 export interface TargetShare {
@@ -67,6 +69,7 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
 
   const byVariable = new Map<string, TargetShare[]>();
   const lines = new Map<string, number>();
+  const partLines = new Map<string, number>();
   for (const { record, info } of records) {
     const line = info.lines;
     const variable = (record[iv] ?? '').trim();
@@ -87,6 +90,15 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
       );
     }
     lines.set(key, line);
+    // A joint row ("age band × sex", "18-24 × female") also locates each of its variables' categories.
+    const parts = variable.split(JOINT_SEPARATOR);
+    const values = category.split(JOINT_SEPARATOR);
+    if (parts.length > 1 && parts.length === values.length) {
+      parts.forEach((part, v) => {
+        const partKey = JSON.stringify([part.trim(), (values[v] as string).trim()]);
+        if (!partLines.has(partKey)) partLines.set(partKey, line);
+      });
+    }
     const list = byVariable.get(variable) ?? [];
     list.push({ category, share });
     byVariable.set(variable, list);
@@ -99,6 +111,9 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
   }
   return {
     targets: [...byVariable].map(([variable, shares]) => ({ variable, shares })),
-    lineOf: (variable, category) => lines.get(JSON.stringify([variable, category])) ?? 0,
+    lineOf: (variable, category) => {
+      const key = JSON.stringify([variable, category]);
+      return lines.get(key) ?? partLines.get(key) ?? 0;
+    },
   };
 }
