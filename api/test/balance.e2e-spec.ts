@@ -118,6 +118,32 @@ describe('live balance', () => {
     expect((await lead.get(`${base}/balance`)).body.n).toBe(before.n);
   });
 
+  it('rakes to joint age band × sex shares when the lead gives them, and to the margins while a joint cell is empty', async () => {
+    const joint: [string, number, number][] = [['18-24', 5.4, 5.6], ['25-34', 8.4, 8.6], ['35-44', 8, 8], ['45-54', 8.5, 8.5], ['55-64', 8.1, 7.9], ['65+', 12.6, 10.4]];
+    const jointShares = joint.flatMap(([age, female, male]) => [{ categories: [age, 'female'], share: female }, { categories: [age, 'male'], share: male }]);
+    expect((await lead.put(`${base}/targets`, { ...VELLMOOR, jointShares })).status).toBe(200);
+    const balance = (await lead.get(`${base}/balance`)).body;
+    expect(balance.withheld).toEqual([]);
+    const cell = balance.margins.find((m: { variable: string; category: string }) => m.variable === 'age_band × sex' && m.category === '65+ × male');
+    expect(cell.target).toBeCloseTo(0.104, 12);
+    expect(Math.abs(cell.weighted - 0.104)).toBeLessThan(1e-6);
+    const female = balance.margins.find((m: { variable: string; category: string }) => m.variable === 'sex' && m.category === 'female');
+    expect(Math.abs(female.weighted - 0.51)).toBeLessThan(1e-6);
+
+    // No counted interview left among young men: weighting falls back to the margins and says why.
+    const young = (await lead.get(`${base}/targets`)).body.variables.flatMap((v: { categories: { id: string; label: string }[] }) => v.categories)
+      .filter((c: { label: string }) => c.label === '18-24' || c.label === 'male').map((c: { id: string }) => c.id);
+    const ids = (await h.db('interviews').where({ project_id: org.projectId }).whereRaw('category_ids @> ?::uuid[]', [young]).select('id')).map((r) => r.id);
+    expect(ids.length).toBeGreaterThan(0);
+    await h.db('interviews').whereIn('id', ids).update({ review_status: 'rejected' });
+    const fallback = (await lead.get(`${base}/balance`)).body;
+    await h.db('interviews').whereIn('id', ids).update({ review_status: 'pending' });
+    await lead.put(`${base}/targets`, VELLMOOR);
+    expect(fallback.weightingProblem).toBeNull();
+    expect(fallback.margins.some((m: { variable: string }) => m.variable === 'age_band × sex')).toBe(false);
+    expect(fallback.withheld[0].reason).toContain('the interlocked cell age_band: 18-24 × sex: male has a target but no interviews');
+  });
+
   it('is read-only for clients and hidden from interviewers', async () => {
     const c = await client(h, org, 'client');
     expect((await c.get(`${base}/balance`)).status).toBe(200);

@@ -155,3 +155,48 @@ describe('targets and cells', () => {
     }
   });
 });
+
+describe('joint shares of interlocked variables', () => {
+  const JOINT_CSV = 'variable,category,share\nage × sex,18-34 × female,14\nage × sex,18-34 × male,16\nage × sex,35-59 × female,21\n' +
+    'age × sex,35-59 × male,19\nage × sex,60+ × female,17\nage × sex,60+ × male,13\nregion,North,5\nregion,South,3\nregion,Coast,2\n';
+
+  it('reads a joint table from a file: its variables are interlocked, their margins summed from it', async () => {
+    const res = await lead.upload(`${projectPath}/targets/parse`, JOINT_CSV);
+    expect(res.status).toBe(200);
+    expect(res.body.variables.map((v: { name: string; interlocked: boolean }) => [v.name, v.interlocked])).toEqual([['age', true], ['sex', true], ['region', false]]);
+    // Shares come back as proportions of the table.
+    expect(res.body.variables[1].categories).toEqual([{ label: 'female', share: expect.closeTo(0.52, 12) }, { label: 'male', share: expect.closeTo(0.48, 12) }]);
+    expect(res.body.jointShares).toHaveLength(6);
+    expect(res.body.jointShares[1]).toEqual({ categories: ['18-34', 'male'], share: expect.closeTo(0.16, 12) });
+  });
+
+  it('saves it: cells take the joint shares, and the targets say so', async () => {
+    const parsed = (await lead.upload(`${projectPath}/targets/parse`, JOINT_CSV)).body;
+    const saved = await lead.put(`${projectPath}/targets`, parsed);
+    expect(saved.status).toBe(200);
+    expect(saved.body.interlockBasis).toBe('joint shares');
+    const cells: Cell[] = (await lead.get(`${projectPath}/cells`)).body.cells;
+    // 16% of 200 young men from the table; the product of the margins would give 30% × 48% = 14.4%.
+    expect(cells.find((c) => c.label === 'age: 18-34 × sex: male')!.target).toBe(32);
+    expect(cells.find((c) => c.label === 'age: 60+ × sex: male')!.target).toBe(26);
+  });
+
+  it('refuses a margin more than 0.5 points off the joint table, naming both figures, and keeps the saved targets', async () => {
+    const parsed = (await lead.upload(`${projectPath}/targets/parse`, JOINT_CSV)).body;
+    parsed.variables[1].categories = [{ label: 'female', share: 50 }, { label: 'male', share: 50 }];
+    const res = await lead.put(`${projectPath}/targets`, parsed);
+    expect(res.status).toBe(400);
+    expect(res.body.message).toContain('variable sex category "female": its own target is 50.0% but the joint table age × sex gives 52.0%');
+    expect((await lead.get(`${projectPath}/targets`)).body.interlockBasis).toBe('joint shares');
+  });
+
+  it('refuses a table with a combination missing, and goes back to the product of the margins without one', async () => {
+    const short = JOINT_CSV.replace('age × sex,60+ × male,13\n', '');
+    const res = await lead.upload(`${projectPath}/targets/parse`, short);
+    expect(res.status).toBe(400);
+    expect(res.body.message).toContain('no share for "60+ × male"');
+    const product = await lead.put(`${projectPath}/targets`, TARGETS);
+    expect(product.body.interlockBasis).toBe('product of margins');
+    expect(product.body.jointShares).toEqual([]);
+  });
+});

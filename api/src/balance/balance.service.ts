@@ -9,7 +9,7 @@ import { EstimationInputError } from '../estimation/errors.js';
 import type { MarginTarget } from '../estimation/raking.js';
 import { summariseWeighting, type OutcomeRakingCell, type OutcomeSummary } from '../estimation/weighting-summary.js';
 import type { WithheldFigure } from '../estimation/withheld.js';
-import { loadActiveTargets } from '../quotas/cell-allocator.js';
+import { loadActiveTargets, loadJointTable } from '../quotas/cell-allocator.js';
 
 export interface BalanceMargin {
   variable: string;
@@ -98,7 +98,11 @@ export class BalanceService {
     const problem = this.weightingProblem(targets, base.margins, n);
     if (problem) return { ...base, weightingProblem: problem };
     try {
-      const summary = summariseWeighting(cells, targets, {}, true, await this.emptyInterlockedCells(project.id, cells, labelOf));
+      const empty = await this.emptyInterlockedCells(project.id, cells, labelOf);
+      // With joint shares, weighting rakes to the interlocked cross; that needs an interview in
+      // every cell with a target, so until then it rakes to the margins and withholds the intervals.
+      const joint = empty.length === 0 ? await loadJointTable(this.db, project.id, variables) : null;
+      const summary = summariseWeighting(cells, joint ? [...targets, joint] : targets, {}, true, empty);
       return {
         ...base,
         converged: summary.converged,

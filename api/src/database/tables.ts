@@ -66,6 +66,16 @@ export interface QuotaCategoryRow {
   retired: boolean;
 }
 
+/** Joint population share of one combination of the interlocked variables' categories. */
+export interface QuotaJointShareRow {
+  id: string;
+  project_id: string;
+  /** One category per interlocked variable, in the variables' order. */
+  category_ids: string[];
+  /** Normalised: a project's rows sum to 1. */
+  share: number;
+}
+
 export interface QuotaCellRow {
   id: string;
   project_id: string;
@@ -165,6 +175,7 @@ declare module 'knex/types/tables.js' {
     quota_variables: QuotaVariableRow;
     quota_categories: QuotaCategoryRow;
     quota_cells: QuotaCellRow;
+    quota_joint_shares: QuotaJointShareRow;
     interviews: InterviewRow;
     interview_counts: InterviewCountRow;
     interview_day_counts: InterviewDayCountRow;

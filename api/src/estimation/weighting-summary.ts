@@ -68,6 +68,7 @@ export function summariseWeighting(
   emptyInterlockedCells: readonly string[] = [],
 ): WeightingSummary {
   const { raking, joint } = resolveTargets(targets);
+  const given = targets.map((t) => t.variable);
   targets = raking;
   const result = rake(cells, targets, options);
   const weights = result.weights;
@@ -83,7 +84,11 @@ export function summariseWeighting(
     weightMin: Math.min(...used),
     weightMax: Math.max(...used),
     maxMarginError: result.maxMarginError,
-    margins: [...result.margins, ...partMargins(cells, weights, joint)],
+    // In the order the targets were given; a joint table's variables follow the table.
+    margins: [...result.margins, ...partMargins(cells, weights, joint)]
+      .map((m, i) => ({ m, i, at: positionOf(given, m.variable, joint) }))
+      .sort((a, b) => a.at - b.at || a.i - b.i)
+      .map(({ m }) => m),
     weights,
     withheld: [],
   };
@@ -110,6 +115,13 @@ export const SHARE_METHOD =
   'standard error linearised through the raking (Deville and Särndal 1992); ' +
   'interval Korn and Graubard (1998) Clopper–Pearson on the effective sample size; ' +
   'for quota samples a model-based figure';
+
+function positionOf(given: string[], variable: string, joint: readonly MarginTarget[]): number {
+  const own = given.indexOf(variable);
+  if (own >= 0) return own;
+  const table = joint.find((j) => j.parts?.includes(variable));
+  return table ? given.indexOf(table.variable) + 0.5 : given.length;
+}
 
 /** The margins of the variables in joint tables, weighted and unweighted, against the table's sums. */
 function partMargins(cells: readonly OutcomeRakingCell[], weights: readonly number[], joint: readonly MarginTarget[]): MarginReport[] {

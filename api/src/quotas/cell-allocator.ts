@@ -5,7 +5,9 @@ import { Inject, Injectable, Module } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
 import type { QuotaCategoryRow, QuotaVariableRow } from '../database/tables.js';
+import { JOINT_SEPARATOR } from '../estimation/joint-names.js';
 import { allocateQuotas } from '../estimation/quotas.js';
+import type { MarginTarget } from '../estimation/raking.js';
 
 export interface ActiveTargets {
   variables: (QuotaVariableRow & { categories: QuotaCategoryRow[] })[];
@@ -16,6 +18,25 @@ export async function loadActiveTargets(db: Knex, projectId: string): Promise<Ac
   const categories = await db('quota_categories').where({ project_id: projectId, retired: false }).orderBy('position');
   return {
     variables: variables.map((v) => ({ ...v, categories: categories.filter((c) => c.variable_id === v.id) })),
+  };
+}
+
+/**
+ * The project's joint table of its interlocked variables as a raking target ("age band × sex",
+ * categories "18-24 × female"), or null when the cells use the product of the margins.
+ */
+export async function loadJointTable(db: Knex, projectId: string, variables: ActiveTargets['variables']): Promise<MarginTarget | null> {
+  const rows = await db('quota_joint_shares').where({ project_id: projectId }).select('category_ids', 'share');
+  const interlocked = variables.filter((v) => v.interlocked);
+  if (rows.length === 0 || interlocked.length < 2) return null;
+  const labels = new Map(interlocked.flatMap((v) => v.categories.map((c) => [c.id, c.label] as const)));
+  const shares = rows.map((r) => ({ labels: r.category_ids.map((id) => labels.get(id)), share: r.share }));
+  // Rows naming a category no longer active belong to targets since replaced: ignore the table.
+  if (shares.some((s) => s.labels.length !== interlocked.length || s.labels.some((l) => l === undefined))) return null;
+  return {
+    variable: interlocked.map((v) => v.name).join(JOINT_SEPARATOR),
+    parts: interlocked.map((v) => v.name),
+    shares: shares.map((s) => ({ category: s.labels.join(JOINT_SEPARATOR), share: s.share })),
   };
 }
 
@@ -48,11 +69,11 @@ export class CellAllocator {
       await trx('quota_cells').where({ project_id: projectId }).delete();
       return;
     }
-    const allocation = allocateQuotas(
-      variables.map((v) => ({ variable: v.name, shares: v.categories.map((c) => ({ category: c.label, share: c.share })) })),
-      project.target_size,
-      { interlock: variables.filter((v) => v.interlocked).map((v) => v.name) },
-    );
+    const joint = await loadJointTable(trx, projectId, variables);
+    const margins = variables.map((v) => ({ variable: v.name, shares: v.categories.map((c) => ({ category: c.label, share: c.share })) }));
+    const allocation = allocateQuotas(joint ? [...margins, joint] : margins, project.target_size, {
+      interlock: variables.filter((v) => v.interlocked).map((v) => v.name),
+    });
     const categoryId = new Map<string, string>();
     for (const v of variables) for (const c of v.categories) categoryId.set(JSON.stringify([v.name, c.label]), c.id);
 

@@ -5,11 +5,19 @@ import { BadRequestException, Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
 import { parseTargetsCsv, TargetsFormatError } from '../formats/targets-csv.js';
-import { CellAllocator, loadVariableViews, type VariableView } from './cell-allocator.js';
+import { EstimationInputError } from '../estimation/errors.js';
+import { JOINT_SEPARATOR } from '../estimation/joint-names.js';
+import { resolveTargets } from '../estimation/joint-targets.js';
+import type { MarginTarget } from '../estimation/raking.js';
+import { CellAllocator, loadActiveTargets, loadJointTable, loadVariableViews, type VariableView } from './cell-allocator.js';
 import type { SaveTargetsDto } from './dto/targets.dto.js';
 
 export interface TargetsView {
   variables: VariableView[];
+  /** Joint shares of the interlocked variables (labels in the variables' order); empty when not given. */
+  jointShares: { categories: string[]; share: number }[];
+  /** Where the interlocked cells' targets come from; null when nothing is interlocked. */
+  interlockBasis: 'joint shares' | 'product of margins' | null;
 }
 
 /** The most cells an interlocked cross may have: more cannot be filled by a field team. */
@@ -41,6 +49,55 @@ export function checkTargets(dto: SaveTargetsDto): void {
   if (crossed > MAX_CROSSED_CELLS) {
     throw invalid(`interlocking ${interlocked.map((v) => v.name).join(' × ')} gives ${crossed} cells; at most ${MAX_CROSSED_CELLS} are allowed`);
   }
+  jointMargins(dto);
+}
+
+/**
+ * The interlocked variables' margins summed from the joint shares, after checking the table
+ * (every combination once, labels of the interlocked variables, margins given alongside within
+ * 0.5 points: joint-targets.ts); null when the targets have no joint shares.
+ */
+export function jointMargins(dto: SaveTargetsDto): Map<string, Map<string, number>> | null {
+  if (!dto.jointShares || dto.jointShares.length === 0) return null;
+  const interlocked = dto.variables.filter((v) => v.interlocked);
+  if (interlocked.length < 2) throw invalid('joint shares need at least two interlocked variables; interlock them, or leave out the joint shares', 'jointShares');
+  const names = interlocked.map((v) => v.name.trim());
+  const labelsOf = interlocked.map((v) => new Set(v.categories.map((c) => c.label.trim())));
+  dto.jointShares.forEach((row, i) => {
+    if (row.categories.length !== interlocked.length) {
+      throw invalid(`joint share ${i + 1}: name one category of each of ${names.join(', ')}`, `jointShares.${i}.categories`);
+    }
+    row.categories.forEach((label, v) => {
+      if (!labelsOf[v]?.has(label.trim())) {
+        throw invalid(`joint share ${i + 1}: "${label.trim()}" is not a category of ${names[v]}`, `jointShares.${i}.categories`);
+      }
+    });
+  });
+  for (const [v, labels] of labelsOf.entries()) {
+    const clash = [...labels].find((l) => l.includes(JOINT_SEPARATOR.trim()));
+    if (clash) throw invalid(`${names[v]}: category "${clash}" contains "${JOINT_SEPARATOR.trim()}", which joint shares use between categories; rename it`, 'jointShares');
+  }
+  const joint: MarginTarget = {
+    variable: names.join(JOINT_SEPARATOR),
+    shares: dto.jointShares.map((row) => ({ category: row.categories.map((c) => c.trim()).join(JOINT_SEPARATOR), share: row.share })),
+  };
+  const margins: MarginTarget[] = interlocked.map((v) => ({
+    variable: v.name.trim(),
+    shares: v.categories.map((c) => ({ category: c.label.trim(), share: c.share })),
+  }));
+  try {
+    const resolved = resolveTargets([joint, ...margins]);
+    return new Map(resolved.margins.map((m) => [m.variable, new Map(m.shares.map((s) => [s.category, s.share]))]));
+  } catch (error) {
+    if (error instanceof EstimationInputError) throw invalid(`joint shares: ${error.message}`, 'jointShares');
+    throw error;
+  }
+}
+
+/** Interlocked variables keep the joint table's order ahead of the rest; the rest keep theirs. */
+function order(interlocked: string[], name: string): number {
+  const i = interlocked.indexOf(name);
+  return i < 0 ? interlocked.length : i;
 }
 
 @Injectable()
@@ -51,11 +108,20 @@ export class TargetsService {
   ) {}
 
   async get(projectId: string): Promise<TargetsView> {
-    return { variables: await loadVariableViews(this.db, projectId) };
+    const variables = await loadVariableViews(this.db, projectId);
+    const { variables: active } = await loadActiveTargets(this.db, projectId);
+    const joint = await loadJointTable(this.db, projectId, active);
+    const interlocked = variables.some((v) => v.interlocked);
+    return {
+      variables,
+      jointShares: joint ? joint.shares.map((s) => ({ categories: s.category.split(JOINT_SEPARATOR), share: s.share })) : [],
+      interlockBasis: !interlocked ? null : joint ? 'joint shares' : 'product of margins',
+    };
   }
 
   async save(projectId: string, dto: SaveTargetsDto): Promise<TargetsView> {
     checkTargets(dto);
+    const fromJoint = jointMargins(dto);
     await this.db.transaction(async (trx) => {
       // One writer per project at a time: syncs and target edits queue behind each other.
       await trx('projects').where({ id: projectId }).forUpdate().first('id');
@@ -67,7 +133,10 @@ export class TargetsService {
           .onConflict(['project_id', 'name'])
           .merge(['position', 'interlocked', 'retired'])
           .returning('*');
-        const total = v.categories.reduce((s, c) => s + c.share, 0);
+        // An interlocked variable with joint shares takes its margin from the table.
+        const joint = fromJoint?.get(v.name.trim());
+        const shareOf = (c: { label: string; share: number }) => joint?.get(c.label.trim()) ?? c.share;
+        const total = v.categories.reduce((s, c) => s + shareOf(c), 0);
         await trx('quota_categories')
           .insert(
             v.categories.map((c, i) => ({
@@ -75,16 +144,33 @@ export class TargetsService {
               project_id: projectId,
               label: c.label.trim(),
               position: i,
-              share: c.share / total,
+              share: shareOf(c) / total,
               retired: false,
             })),
           )
           .onConflict(['variable_id', 'label'])
           .merge(['position', 'share', 'retired']);
       }
+      await this.saveJointShares(trx, projectId, dto);
       await this.cells.recompute(projectId, trx);
     });
     return this.get(projectId);
+  }
+
+  private async saveJointShares(trx: Knex.Transaction, projectId: string, dto: SaveTargetsDto): Promise<void> {
+    await trx('quota_joint_shares').where({ project_id: projectId }).delete();
+    if (!dto.jointShares || dto.jointShares.length === 0) return;
+    const interlocked = dto.variables.filter((v) => v.interlocked).map((v) => v.name.trim());
+    const { variables } = await loadActiveTargets(trx, projectId);
+    const idOf = new Map(variables.flatMap((v) => v.categories.map((c) => [JSON.stringify([v.name, c.label]), c.id] as const)));
+    const total = dto.jointShares.reduce((s, row) => s + row.share, 0);
+    await trx('quota_joint_shares').insert(
+      dto.jointShares.map((row) => ({
+        project_id: projectId,
+        category_ids: row.categories.map((label, v) => idOf.get(JSON.stringify([interlocked[v], label.trim()])) as string),
+        share: row.share / total,
+      })),
+    );
   }
 
   /** Reads an uploaded targets file into the shape `save` takes, without saving anything. */
@@ -98,16 +184,36 @@ export class TargetsService {
       throw invalid(`${file.originalname ?? 'the file'}: is not UTF-8 text; save it as CSV (UTF-8)`, 'file');
     }
     try {
-      const parsed = parseTargetsCsv(content, file.originalname || 'targets file');
-      const chosen = interlock.split(',').map((s) => s.trim()).filter(Boolean);
-      const unknown = chosen.find((name) => !parsed.targets.some((t) => t.variable === name));
-      if (unknown) throw invalid(`interlock: unknown variable ${unknown}; the file has ${parsed.targets.map((t) => t.variable).join(', ')}`, 'interlock');
+      const source = file.originalname || 'targets file';
+      const parsed = parseTargetsCsv(content, source);
+      let resolved;
+      try {
+        resolved = resolveTargets(parsed.targets);
+      } catch (error) {
+        if (error instanceof EstimationInputError) throw invalid(`${source}: ${error.message}`, 'file');
+        throw error;
+      }
+      const table = resolved.joint[0];
+      if (resolved.joint.length > 1) throw invalid(`${source}: joint shares are given for ${resolved.joint.map((j) => j.variable).join(' and ')}; a project interlocks one set of variables`, 'file');
+      let chosen = interlock.split(',').map((s) => s.trim()).filter(Boolean);
+      const unknown = chosen.find((name) => !resolved.margins.some((t) => t.variable === name));
+      if (unknown) throw invalid(`interlock: unknown variable ${unknown}; the file has ${resolved.margins.map((t) => t.variable).join(', ')}`, 'interlock');
+      if (table) {
+        const parts = [...(table.parts ?? [])];
+        if (chosen.length > 0 && (chosen.length !== parts.length || chosen.some((c) => !parts.includes(c)))) {
+          throw invalid(`interlock: ${source} gives joint shares for ${parts.join(' × ')}; interlock exactly those`, 'interlock');
+        }
+        chosen = parts;
+      }
+      // Interlocked variables are listed in the joint table's order, so its categories line up.
+      const ordered = table ? [...resolved.margins].sort((a, b) => order(chosen, a.variable) - order(chosen, b.variable)) : resolved.margins;
       const dto: SaveTargetsDto = {
-        variables: parsed.targets.map((t) => ({
+        variables: ordered.map((t) => ({
           name: t.variable,
           interlocked: chosen.includes(t.variable),
           categories: t.shares.map((s) => ({ label: s.category, share: s.share })),
         })),
+        ...(table ? { jointShares: table.shares.map((s) => ({ categories: s.category.split(JOINT_SEPARATOR), share: s.share })) } : {}),
       };
       checkTargets(dto);
       return dto;

@@ -48,6 +48,20 @@ export class TargetVariableDto {
   categories: TargetCategoryDto[];
 }
 
+export class JointShareDto {
+  @ApiProperty({ example: ['18-24', 'female'], description: 'One category label per interlocked variable, in the order the variables are listed' })
+  @IsArray()
+  @ArrayMinSize(2, { message: 'categories must name one category of each interlocked variable' })
+  @ArrayMaxSize(20)
+  @IsString({ each: true })
+  categories: string[];
+
+  @ApiProperty({ example: 0.054, description: 'Joint population share; any non-negative numbers, normalised over the table' })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'share must be a number' })
+  @Min(0, { message: 'share must not be negative' })
+  share: number;
+}
+
 export class SaveTargetsDto {
   @ApiProperty({ type: [TargetVariableDto] })
   @IsArray()
@@ -56,4 +70,15 @@ export class SaveTargetsDto {
   @ValidateNested({ each: true })
   @Type(() => TargetVariableDto)
   variables: TargetVariableDto[];
+
+  @ApiPropertyOptional({
+    type: [JointShareDto],
+    description: 'Joint shares of the interlocked variables (every combination); without them cell targets are the product of the margins',
+  })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(2000)
+  @ValidateNested({ each: true })
+  @Type(() => JointShareDto)
+  jointShares?: JointShareDto[];
 }
