@@ -14,8 +14,18 @@ export interface TargetVariable {
   categories: TargetCategory[];
 }
 
+/** Joint population share of one combination of the interlocked variables' categories (in their order). */
+export interface JointShare {
+  categories: string[];
+  share: number;
+}
+
 export interface Targets {
   variables: TargetVariable[];
+  /** Joint shares of the interlocked variables; absent or empty when cell targets are the product of the margins. */
+  jointShares?: JointShare[];
+  /** Where the interlocked cells' targets come from (set by the server); null when nothing is interlocked. */
+  interlockBasis?: 'joint shares' | 'product of margins' | null;
 }
 
 export const targetKeys = {

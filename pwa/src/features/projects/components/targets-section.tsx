@@ -5,6 +5,7 @@ import { useTargets, type Targets } from '../api/get-targets';
 import { useSaveTargets } from '../api/save-targets';
 import { CellTargets } from './cell-targets';
 import { blankVariable, checkDraftTargets, draftFrom, type DraftVariable } from './targets-draft';
+import { JointSharesNote, type HeldJoint } from './joint-shares-note';
 import { TargetsUpload } from './targets-upload';
 import { VariableEditor } from './variable-editor';
 
@@ -18,12 +19,19 @@ export function TargetsSection({ project }: { project: Project }) {
   );
 }
 
+/** The joint shares targets carry, tied to the interlocked variables they were given for. */
+function heldJoint(targets: Targets, source: string): HeldJoint | null {
+  if (!targets.jointShares || targets.jointShares.length === 0) return null;
+  return { variables: targets.variables.filter((v) => v.interlocked).map((v) => v.name), shares: targets.jointShares, source };
+}
+
 function TargetsEditor({ project, saved }: { project: Project; saved: Targets }) {
   const save = useSaveTargets(project.id);
   const [draft, setDraft] = useState<DraftVariable[]>(() => (saved.variables.length ? draftFrom(saved, 100) : [blankVariable()]));
   const [fromFile, setFromFile] = useState<string | null>(null);
   const [problems, setProblems] = useState<string[]>([]);
   const [savedNote, setSavedNote] = useState(false);
+  const [joint, setJoint] = useState<HeldJoint | null>(() => heldJoint(saved, 'saved'));
   const interlocked = draft.filter((v) => v.interlocked).map((v) => v.name.trim() || 'unnamed');
 
   const change = (next: DraftVariable[]) => {
@@ -32,9 +40,14 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
   };
   const submit = () => {
     const checked = checkDraftTargets(draft);
+    if (joint && joint.variables.join('\u0000') !== interlocked.join('\u0000')) {
+      checked.problems.push(
+        `The joint shares are for ${joint.variables.join(' × ')}: interlock exactly those, or use the product of the margins instead.`,
+      );
+    }
     setProblems(checked.problems);
-    if (!checked.targets) return;
-    save.mutate(checked.targets, {
+    if (!checked.targets || checked.problems.length > 0) return;
+    save.mutate(joint ? { ...checked.targets, jointShares: joint.shares } : checked.targets, {
       onSuccess: () => {
         setFromFile(null);
         setSavedNote(true);
@@ -53,6 +66,7 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
         projectId={project.id}
         onRead={(targets, name) => {
           change(draftFrom(targets, 1));
+          setJoint(heldJoint(targets, name));
           setFromFile(name);
         }}
       />
@@ -73,6 +87,14 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
           />
         ))}
       </div>
+      <JointSharesNote
+        interlocked={interlocked}
+        joint={joint}
+        onDrop={() => {
+          setJoint(null);
+          setSavedNote(false);
+        }}
+      />
       <p className="pl-small">
         {interlocked.length >= 2
           ? `Interlocked: ${interlocked.join(' × ')}; every other variable is a margin quota.`

@@ -102,6 +102,49 @@ describe('quota targets from a CSV file', () => {
         { name: 'sex', interlocked: true, categories: [{ label: 'female', share: 51 }, { label: 'male', share: 49 }] },
       ],
     });
+    // Without joint shares the page says the cells are the product of the margins.
+    expect(screen.getByRole('note', { name: 'Cell targets of interlocked variables' })).toHaveTextContent(
+      /Cell targets for age_band × sex are the product of their margins, as if these variables were independent/,
+    );
+  });
+
+  it('keeps the joint shares a file gives, says the cells come from them, and sends them with the targets', async () => {
+    const api = projectApi();
+    const jointShares = [
+      { categories: ['18-34', 'female'], share: 0.16 }, { categories: ['18-34', 'male'], share: 0.14 },
+      { categories: ['35+', 'female'], share: 0.35 }, { categories: ['35+', 'male'], share: 0.35 },
+    ];
+    api.on('POST', '/api/projects/p9/targets/parse', () =>
+      json({
+        variables: [
+          { name: 'age_band', interlocked: true, categories: [{ label: '18-34', share: 0.3 }, { label: '35+', share: 0.7 }] },
+          { name: 'sex', interlocked: true, categories: [{ label: 'female', share: 0.51 }, { label: 'male', share: 0.49 }] },
+        ],
+        jointShares,
+      }),
+    );
+    api.on('PUT', '/api/projects/p9/targets', ({ body }) => json({ ...(body as object), interlockBasis: 'joint shares' }));
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.upload(await screen.findByLabelText('Targets file (CSV: variable,category,share)'), csv());
+    await user.click(screen.getByRole('button', { name: 'Read file' }));
+    const note = await screen.findByRole('note', { name: 'Cell targets of interlocked variables' });
+    expect(note).toHaveTextContent('Cell targets for age_band × sex come from their joint shares (4 combinations, read from targets.csv)');
+
+    // Unticking one of the table's variables would orphan the table: refused before anything is sent.
+    await user.click(screen.getByLabelText('Interlock sex'));
+    await user.click(screen.getByLabelText('Interlock age_band'));
+    await user.click(screen.getByRole('button', { name: 'Save targets' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('The joint shares are for age_band × sex: interlock exactly those');
+    expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
+
+    await user.click(screen.getByLabelText('Interlock age_band'));
+    await user.click(screen.getByLabelText('Interlock sex'));
+    await user.click(screen.getByRole('button', { name: 'Save targets' }));
+    expect(await screen.findByText(/Targets saved/)).toBeInTheDocument();
+    expect(api.calls.find((c) => c.method === 'PUT')?.body).toMatchObject({ jointShares });
   });
 });
 
