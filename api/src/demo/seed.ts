@@ -14,7 +14,7 @@ import { ProjectAccess } from '../projects/project-access.service.js';
 import { CellAllocator } from '../quotas/cell-allocator.js';
 import { CellsService } from '../quotas/cells.service.js';
 import { TargetsService } from '../quotas/targets.service.js';
-import { drawRespondent, seeded, VELLMOOR_TARGETS } from './vellmoor.js';
+import { drawRespondent, seeded, VELLMOOR_AGE_SEX, VELLMOOR_TARGETS } from './vellmoor.js';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
 export const DEMO_ORGANISATION = 'Vellmoor Field Research';
@@ -80,6 +80,10 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
       interlocked: name === 'age_band' || name === 'sex',
       categories: Object.entries(shares).map(([label, share]) => ({ label, share })),
     })),
+    jointShares: Object.entries(VELLMOOR_AGE_SEX).flatMap(([age, { female, male }]) => [
+      { categories: [age, 'female'], share: female },
+      { categories: [age, 'male'], share: male },
+    ]),
   });
   const { variables } = await cells.cells(project.id);
   const idOf = (variable: string, label: string) => {

@@ -11,6 +11,20 @@ export const VELLMOOR_TARGETS: Record<string, Record<string, number>> = {
   education: { basic: 18, secondary: 37, vocational: 21, degree: 24 },
 };
 
+/**
+ * Joint age band × sex shares (percent), as a census table gives them: they sum to the age
+ * margins above and to 51% women, with more women than men among the over-65s. The demo
+ * project's interlocked cells take these; docs/examples/vellmoor-targets-joint.csv holds the same.
+ */
+export const VELLMOOR_AGE_SEX: Record<string, { female: number; male: number }> = {
+  '18-24': { female: 5.4, male: 5.6 },
+  '25-34': { female: 8.4, male: 8.6 },
+  '35-44': { female: 8, male: 8 },
+  '45-54': { female: 8.5, male: 8.5 },
+  '55-64': { female: 8.1, male: 7.9 },
+  '65+': { female: 12.6, male: 10.4 },
+};
+
 /** How the achieved sample leans away from the targets (relative response propensity). */
 export const VELLMOOR_LEAN: Record<string, Record<string, number>> = {
   age_band: { '18-24': 0.6, '25-34': 0.8, '35-44': 1, '45-54': 1.1, '55-64': 1.3, '65+': 1.2 },
