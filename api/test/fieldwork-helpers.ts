@@ -1,6 +1,7 @@
 // Helpers for the fieldwork suites: an API client per signed-in user and a standard
 // set of quota targets (invented, for tests only).
 import { randomUUID } from 'node:crypto';
+import { expect } from 'vitest';
 import { createOrg, signIn, type Harness, type TestOrg } from './harness.js';
 
 export async function client(h: Harness, org: TestOrg, role: keyof TestOrg['users']) {
@@ -54,8 +55,11 @@ export function complete(categories: Record<string, string>, headlineAnswer = tr
 export async function syncProject(h: Harness, name: string, project: Record<string, unknown> = {}) {
   const org = await createOrg(h.db, name);
   const lead = await client(h, org, 'lead');
-  await lead.patch(`/api/projects/${org.projectId}`, { targetSize: 100, headlineQuestion: 'Support?', ...project });
+  const { status, ...details } = project;
+  await lead.patch(`/api/projects/${org.projectId}`, { targetSize: 100, headlineQuestion: 'Support?', ...details });
   const targets = (await lead.put(`/api/projects/${org.projectId}/targets`, TARGETS)).body as Targets;
+  // Fieldwork starts only once there are targets (and a team, which createOrg assigns).
+  if (status !== undefined) expect((await lead.patch(`/api/projects/${org.projectId}`, { status })).status).toBe(200);
   const interviewer = await client(h, org, 'interviewer');
   return { org, lead, targets, interviewer, syncPath: `/api/projects/${org.projectId}/interviews/sync` };
 }

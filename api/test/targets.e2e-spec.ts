@@ -35,6 +35,23 @@ describe('project set-up', () => {
     expect(res.body.fields).toEqual([{ field: 'fieldEnd', message: 'must not be before fieldStart' }]);
   });
 
+  it('starts fieldwork only with quota targets and an interviewer on the team, saying what is missing', async () => {
+    const created = (await lead.post('/api/projects', {
+      name: 'Not ready', fieldStart: '2026-12-01', fieldEnd: '2026-12-20', targetSize: 100, headlineQuestion: 'Ready?',
+    })).body;
+    const path = `/api/projects/${created.id}`;
+    const early = await lead.patch(path, { status: 'fieldwork' });
+    expect(early.status).toBe(400);
+    expect(early.body.message).toBe('Fieldwork cannot start yet: save quota targets and add at least one interviewer to the team.');
+    expect((await lead.get(path)).body.status).toBe('setup');
+    await lead.put(`${path}/targets`, TARGETS);
+    expect((await lead.patch(path, { status: 'fieldwork' })).body.message).toBe('Fieldwork cannot start yet: add at least one interviewer to the team.');
+    await lead.put(`${path}/members`, { userIds: [org.users.interviewer.id] });
+    const started = await lead.patch(path, { status: 'fieldwork' });
+    expect(started.status).toBe(200);
+    expect(started.body.status).toBe('fieldwork');
+  });
+
   it('lets no supervisor or client create projects', async () => {
     for (const role of ['supervisor', 'client', 'interviewer'] as const) {
       const c = await client(h, org, role);

@@ -97,6 +97,7 @@ export class ProjectsService {
     if (dto.targetSize !== undefined) changes.target_size = dto.targetSize;
     if (dto.headlineQuestion !== undefined) changes.headline_question = dto.headlineQuestion.trim();
     if (dto.status !== undefined) changes.status = dto.status;
+    if (changes.status === 'fieldwork' && current.status === 'setup') await this.checkReadyForFieldwork(current);
     if (dto.timeZone !== undefined) changes.time_zone = dto.timeZone;
     if (Object.keys(changes).length === 0) return projectSummary(current);
     const row = await this.db.transaction(async (trx) => {
@@ -113,6 +114,26 @@ export class ProjectsService {
       return updated as ProjectRow;
     });
     return projectSummary(row);
+  }
+
+  /** Fieldwork starts only with quota targets that give cells and at least one interviewer on the team. */
+  private async checkReadyForFieldwork(project: ProjectRow): Promise<void> {
+    const [cells, interviewers] = await Promise.all([
+      this.db('quota_cells').where({ project_id: project.id }).where('target', '>', 0).count<{ count: string }[]>('* as count'),
+      this.db('project_members')
+        .join('users', 'users.id', 'project_members.user_id')
+        .where('project_members.project_id', project.id)
+        .where('users.role', 'interviewer')
+        .where('users.active', true)
+        .count<{ count: string }[]>('* as count'),
+    ]);
+    const missing: string[] = [];
+    if (Number(cells[0]?.count ?? 0) === 0) missing.push('save quota targets');
+    if (Number(interviewers[0]?.count ?? 0) === 0) missing.push('add at least one interviewer to the team');
+    if (missing.length > 0) {
+      const message = `Fieldwork cannot start yet: ${missing.join(' and ')}.`;
+      throw new BadRequestException({ message, fields: [{ field: 'status', message }] });
+    }
   }
 
   async members(user: AuthUser, id: string): Promise<ProjectMember[]> {

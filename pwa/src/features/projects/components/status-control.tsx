@@ -1,6 +1,8 @@
+import { useState } from 'react';
+import { Dialog } from '../../../components/dialog';
+import { FormProblem } from '../../../components/form-problem';
 import type { Project } from '../../../lib/projects/get-projects';
 import { useUpdateProject, type ProjectStatus } from '../api/update-project';
-import { FormProblem } from '../../../components/form-problem';
 
 export const statusWords: Record<string, string> = {
   setup: 'Being set up',
@@ -8,23 +10,63 @@ export const statusWords: Record<string, string> = {
   closed: 'Field closed',
 };
 
-const moves: Record<ProjectStatus, { to: ProjectStatus; label: string }[]> = {
-  setup: [{ to: 'fieldwork', label: 'Start fieldwork' }],
-  fieldwork: [
-    { to: 'closed', label: 'Close fieldwork' },
-    { to: 'setup', label: 'Back to set-up' },
+interface Move {
+  to: ProjectStatus;
+  label: string;
+  question: string;
+  /** What happens to phones and interviews, in words. */
+  effect: string;
+}
+
+const moves: Record<ProjectStatus, Move[]> = {
+  setup: [
+    {
+      to: 'fieldwork',
+      label: 'Start fieldwork',
+      question: 'Start fieldwork?',
+      effect:
+        'Interviewers on the team get the cells at their next sync and can log contacts. Targets can still be changed; every interview logged is kept.',
+    },
   ],
-  closed: [{ to: 'fieldwork', label: 'Reopen fieldwork' }],
+  fieldwork: [
+    {
+      to: 'closed',
+      label: 'Close fieldwork',
+      question: 'Close fieldwork?',
+      effect:
+        'Interviewers see the project as closed. Interviews still on their phones are accepted when they sync and marked as sent after closing, so nothing logged is lost.',
+    },
+    {
+      to: 'setup',
+      label: 'Back to set-up',
+      question: 'Move the project back to set-up?',
+      effect:
+        'Every interview logged so far is kept and still counts, and phones can still send what they hold. Use this to rework targets or the team; saving new targets recomputes the cells.',
+    },
+  ],
+  closed: [
+    {
+      to: 'fieldwork',
+      label: 'Reopen fieldwork',
+      question: 'Reopen fieldwork?',
+      effect: 'Interviewers can log contacts again from their next sync; interviews sent while it was closed keep their mark.',
+    },
+  ],
 };
 
-/** The project's stage: set-up → in the field → closed, one step at a time. */
+/** The project's stage: set-up → in the field → closed, one step at a time, each asked first. */
 export function StatusControl({ project }: { project: Project }) {
   const update = useUpdateProject(project.id);
+  const [asking, setAsking] = useState<Move | null>(null);
   const current = (project.status in moves ? project.status : 'setup') as ProjectStatus;
+  const close = () => {
+    setAsking(null);
+    update.reset();
+  };
   return (
     <div className="pl-status-control">
       <p>
-        Stage: <strong>{statusWords[project.status] ?? project.status}</strong>
+        Now: <strong>{statusWords[project.status] ?? project.status}</strong>
       </p>
       <div className="pl-form-actions">
         {moves[current].map((move) => (
@@ -33,13 +75,31 @@ export function StatusControl({ project }: { project: Project }) {
             type="button"
             className={`pl-button ${move.to === 'setup' ? 'pl-button-quiet' : 'pl-button-main'} pl-button-small`}
             disabled={update.isPending}
-            onClick={() => update.mutate({ status: move.to })}
+            onClick={() => setAsking(move)}
           >
             {move.label}
           </button>
         ))}
       </div>
-      <FormProblem message={update.error?.message} />
+      {asking ? (
+        <Dialog title={asking.question} onClose={close} placement="sheet">
+          <p>{asking.effect}</p>
+          <FormProblem message={update.error?.message} />
+          <div className="pl-dialog-actions">
+            <button type="button" className="pl-button pl-button-quiet" onClick={close}>
+              Cancel
+            </button>
+            <button
+              type="button"
+              className="pl-button pl-button-main"
+              disabled={update.isPending}
+              onClick={() => update.mutate({ status: asking.to }, { onSuccess: () => setAsking(null) })}
+            >
+              {asking.label}
+            </button>
+          </div>
+        </Dialog>
+      ) : null}
     </div>
   );
 }

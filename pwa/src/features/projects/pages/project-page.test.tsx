@@ -170,6 +170,48 @@ describe('quota targets typed in', () => {
   });
 });
 
+describe('the project stage', () => {
+  it('asks before starting fieldwork, shows why the server refuses, and moves on once confirmed', async () => {
+    const api = projectApi();
+    let ready = false;
+    api.on('PATCH', '/api/projects/p9', ({ body }) =>
+      ready
+        ? json({ ...project, ...(body as object) })
+        : json({ statusCode: 400, message: 'Fieldwork cannot start yet: add at least one interviewer to the team.' }, 400),
+    );
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.click(await screen.findByRole('button', { name: 'Start fieldwork' }));
+    const dialog = screen.getByRole('dialog', { name: 'Start fieldwork?' });
+    expect(dialog).toHaveTextContent('Interviewers on the team get the cells at their next sync');
+    expect(api.calls.some((c) => c.method === 'PATCH')).toBe(false);
+    await user.click(within(dialog).getByRole('button', { name: 'Start fieldwork' }));
+    expect(await within(dialog).findByText('Fieldwork cannot start yet: add at least one interviewer to the team.')).toBeInTheDocument();
+
+    ready = true;
+    await user.click(within(dialog).getByRole('button', { name: 'Start fieldwork' }));
+    expect(await screen.findByText('In the field')).toBeInTheDocument();
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+    expect(api.calls.filter((c) => c.method === 'PATCH').map((c) => c.body)).toEqual([{ status: 'fieldwork' }, { status: 'fieldwork' }]);
+  });
+
+  it('says what happens to interviews before moving a project in the field back to set-up, and Cancel changes nothing', async () => {
+    const api = projectApi('fieldwork');
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.click(await screen.findByRole('button', { name: 'Back to set-up' }));
+    const dialog = screen.getByRole('dialog', { name: 'Move the project back to set-up?' });
+    expect(dialog).toHaveTextContent('Every interview logged so far is kept and still counts');
+    await user.click(within(dialog).getByRole('button', { name: 'Cancel' }));
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+    expect(api.calls.some((c) => c.method === 'PATCH')).toBe(false);
+  });
+});
+
 describe('the team', () => {
   it("assigns the agency's people by role", async () => {
     const api = projectApi();
