@@ -99,7 +99,7 @@ describe('interviewer offline at phone size', () => {
       await page.getByRole('heading', { level: 1, name: 'Cells' }).waitFor({ state: 'hidden' });
 
       await logComplete(page, { 'Age band': '18-24', Sex: 'female', Region: 'Harrowby', Education: 'degree' }, 'No');
-      const warning = page.getByRole('dialog', { name: 'Interview in a full cell?' });
+      const warning = page.getByRole('dialog', { name: 'Their cell is closed' });
       await warning.waitFor();
       expect(await warning.textContent()).toContain('age band: 18-24 × sex: female is closed');
       expect(await page.getByRole('alert').first().textContent()).toContain('full or closed');

@@ -12,9 +12,9 @@ interface PlannedPageProps {
 export function PlannedPage({ title, children }: PlannedPageProps) {
   return (
     <PageFrame title={title}>
-      <EmptyPanel title="Nothing here yet">
+      <EmptyPanel title="Coming in a later version">
         {children}
-        <p className="pl-muted">This page arrives in a coming update of Plumbline.</p>
+        <p className="pl-muted">Nothing is missing from your work: this page is not built yet and arrives in a coming update of Plumbline.</p>
       </EmptyPanel>
     </PageFrame>
   );

@@ -63,17 +63,21 @@ export function CellCheckStep({ cells, syncedAt, onStart, onBack }: CellCheckSte
         </button>
       </div>
       {confirming ? (
-        <Dialog title="Interview in a full cell?" placement="sheet" onClose={() => setConfirming(false)}>
+        <Dialog
+          title={blocking.some((cell) => cell.status === 'closed') ? 'Their cell is closed' : 'Their cell is full'}
+          placement="sheet"
+          onClose={() => setConfirming(false)}
+        >
           <p className="pl-dialog-warning">
             {blocking.map((cell) => `${cellWord(cell.label)} is ${cell.status === 'closed' ? 'closed' : 'full'}`).join('; ')}.
           </p>
           <p>The interview will be accepted and counted as over quota, for your supervisor to decide.</p>
           <div className="pl-dialog-actions">
-            <button type="button" className="pl-button pl-button-quiet" onClick={() => setConfirming(false)} autoFocus>
-              Go back
-            </button>
-            <button type="button" className="pl-button pl-button-main" onClick={onStart}>
+            <button type="button" className="pl-button pl-button-quiet" onClick={onStart}>
               Interview anyway
+            </button>
+            <button type="button" className="pl-button pl-button-main" onClick={() => setConfirming(false)} autoFocus>
+              Go back
             </button>
           </div>
         </Dialog>

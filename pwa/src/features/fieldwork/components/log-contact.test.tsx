@@ -38,9 +38,12 @@ describe('logging a contact', () => {
 
     expect(screen.getByRole('alert')).toHaveTextContent('One of their cells is full or closed');
     await user.click(screen.getByRole('button', { name: 'Start the interview' }));
-    const dialog = await screen.findByRole('dialog', { name: 'Interview in a full cell?' });
+    const dialog = await screen.findByRole('dialog', { name: 'Their cell is full' });
     expect(dialog).toHaveTextContent('age band: 18-34 is full');
     expect(dialog).toHaveTextContent('counted as over quota');
+    // The safe choice is the main one; interviewing anyway is the quiet one.
+    expect(within(dialog).getByRole('button', { name: 'Go back' })).toHaveClass('pl-button-main');
+    expect(within(dialog).getByRole('button', { name: 'Interview anyway' })).toHaveClass('pl-button-quiet');
     await user.click(within(dialog).getByRole('button', { name: 'Interview anyway' }));
 
     expect(screen.getByText('Do you support extending the tram line?')).toBeInTheDocument();
@@ -65,7 +68,7 @@ describe('logging a contact', () => {
     expect(within(theirCells).getByText('Full')).toBeInTheDocument();
     expect(within(theirCells).getAllByRole('listitem')[0]).toHaveTextContent('age band: 18-34Full0 of 50 left');
     await user.click(screen.getByRole('button', { name: 'Start the interview' }));
-    expect(await screen.findByRole('dialog', { name: 'Interview in a full cell?' })).toBeInTheDocument();
+    expect(await screen.findByRole('dialog', { name: 'Their cell is full' })).toBeInTheDocument();
   });
 
   it('goes straight to the headline question when the respondent’s cells are open', async () => {

@@ -72,7 +72,7 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
       />
       {fromFile ? (
         <p className="pl-form-note" role="status">
-          Read from {fromFile}: {draft.length} variables. Nothing is saved yet: check the figures below, tick the variables
+          Read from {fromFile}: {draft.length === 1 ? '1 variable' : `${draft.length} variables`}. Nothing is saved yet: check the figures below, tick the variables
           to interlock, then save.
         </p>
       ) : null}

@@ -15,9 +15,11 @@ interface BoardFiltersProps {
   onChange: (view: BoardView) => void;
   shown: number;
   total: number;
+  /** A category of this project, to show what the search takes. */
+  example?: string;
 }
 
-export function BoardFilters({ view, onChange, shown, total }: BoardFiltersProps) {
+export function BoardFilters({ view, onChange, shown, total, example }: BoardFiltersProps) {
   const statusId = useId();
   const textId = useId();
   return (
@@ -43,7 +45,7 @@ export function BoardFilters({ view, onChange, shown, total }: BoardFiltersProps
           id={textId}
           className="pl-input"
           type="search"
-          placeholder="e.g. 18-24 or Harrowby"
+          placeholder={example ? `e.g. ${example}` : 'a category'}
           value={view.text}
           onChange={(event) => onChange({ ...view, text: event.target.value })}
         />

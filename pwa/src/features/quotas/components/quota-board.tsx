@@ -71,7 +71,7 @@ function BoardContent({ board, projectId, refreshing, checkedAt }: { board: Boar
           {refreshing ? ' · refreshing…' : ''}
         </p>
       </div>
-      <BoardFilters view={view} onChange={setView} shown={cells.length} total={board.cells.length} />
+      <BoardFilters view={view} onChange={setView} shown={cells.length} total={board.cells.length} example={exampleCategory(board.cells)} />
       {cells.length === 0 ? (
         <EmptyPanel title="No cells match">
           <p>Change the status or the text to see more cells.</p>
@@ -99,4 +99,9 @@ function BoardContent({ board, projectId, refreshing, checkedAt }: { board: Boar
       ) : null}
     </>
   );
+}
+
+/** A category of this project for the search's example ("region: Tarnholm" → "Tarnholm"). */
+function exampleCategory(cells: Cell[]): string | undefined {
+  return cells.at(-1)?.label.split(' × ').at(-1)?.split(': ').at(-1);
 }

@@ -60,6 +60,8 @@ describe("supervisor's quota board on a desktop", () => {
     expect(screen.getByText('2 of 4 cells')).toBeInTheDocument();
 
     await user.selectOptions(screen.getByLabelText('Status'), 'All cells');
+    // The search's example names a category of this project, not a fixed place.
+    expect(screen.getByLabelText('Find a cell').getAttribute('placeholder')).toMatch(/^e\.g\. (basic|Harrowby|Kestle Vale|Mardon)$/);
     await user.type(screen.getByLabelText('Find a cell'), 'kestle');
     expect(rowLabels()).toEqual(['region: Kestle Vale']);
 
