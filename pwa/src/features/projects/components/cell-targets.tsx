@@ -2,6 +2,7 @@ import { QueryView } from '../../../components/query-view';
 import { EmptyPanel } from '../../../components/state-panels';
 import { formatCount } from '../../../lib/format';
 import { useCells } from '../api/get-cells';
+import { ScrollBox } from '../../../components/scroll-box';
 
 /** The cell targets the server allocated (whole numbers that add up to the sample size). */
 export function CellTargets({ projectId }: { projectId: string }) {
@@ -19,7 +20,7 @@ export function CellTargets({ projectId }: { projectId: string }) {
       }
     >
       {(data) => (
-        <div className="pl-table-wrap">
+        <ScrollBox label="Cell targets, scrolls sideways">
           <table className="pl-table" aria-label="Cell targets">
             <thead>
               <tr>
@@ -40,7 +41,7 @@ export function CellTargets({ projectId }: { projectId: string }) {
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollBox>
       )}
     </QueryView>
   );

@@ -4,6 +4,7 @@ import { type BoardView, type SortColumn } from './board-view';
 import { CellStatusTag } from './cell-status-tag';
 import { CellToggleButton } from './cell-toggle-button';
 import { FillBar } from './fill-bar';
+import { ScrollBox } from '../../../components/scroll-box';
 
 interface CellTableProps {
   cells: Cell[];
@@ -25,7 +26,7 @@ const columns: { key: SortColumn; label: string; numeric?: boolean }[] = [
 /** The desktop board: one row per cell, sortable by any column. */
 export function CellTable({ cells, view, onSort, onToggle }: CellTableProps) {
   return (
-    <div className="pl-table-wrap">
+    <ScrollBox label="Cells, scrolls sideways">
       <table className="pl-table pl-cell-table" aria-label="Cells">
         <thead>
           <tr>
@@ -82,6 +83,6 @@ export function CellTable({ cells, view, onSort, onToggle }: CellTableProps) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

@@ -1,5 +1,6 @@
 import { formatCount } from '../../../lib/format';
 import { useFlaggedInterviews } from '../api/get-flagged-interviews';
+import { ScrollBox } from '../../../components/scroll-box';
 
 /**
  * The quota board's count of interviews kept but flagged on arrival, by reason. A section of
@@ -23,7 +24,7 @@ export function FlaggedInterviewsSection({ projectId }: { projectId: string }) {
             Kept and counted, but worth a look: <span className="pl-figure">{formatCount(data.total)}</span>{' '}
             {data.total === 1 ? 'interview' : 'interviews'} in all.
           </p>
-          <div className="pl-table-wrap">
+          <ScrollBox label="Flagged interviews, scrolls sideways">
             <table className="pl-table" aria-label="Flagged interviews">
               <thead>
                 <tr>
@@ -40,7 +41,7 @@ export function FlaggedInterviewsSection({ projectId }: { projectId: string }) {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollBox>
         </>
       )}
     </section>

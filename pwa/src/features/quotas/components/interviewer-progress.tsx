@@ -1,5 +1,6 @@
 import { formatCount } from '../../../lib/format';
 import type { InterviewerProgress } from '../api/get-quota-board';
+import { ScrollBox } from '../../../components/scroll-box';
 
 /** Completes per interviewer: today and in total (staff data, never shown to clients). */
 export function InterviewerProgressTable({ interviewers }: { interviewers: InterviewerProgress[] }) {
@@ -7,7 +8,7 @@ export function InterviewerProgressTable({ interviewers }: { interviewers: Inter
     return <p className="pl-muted">No interviewers are assigned to this project yet.</p>;
   }
   return (
-    <div className="pl-table-wrap">
+    <ScrollBox label="Interviewers, scrolls sideways">
       <table className="pl-table" aria-label="Interviewers">
         <thead>
           <tr>
@@ -30,6 +31,6 @@ export function InterviewerProgressTable({ interviewers }: { interviewers: Inter
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }
