@@ -36,7 +36,7 @@ describe('interviews the project did not expect', () => {
     const late = endingOn('2026-12-08');
     const res = await interviewer.post(syncPath, { interviews: [early, late] });
     expect(res.body).toMatchObject({ accepted: 2, rejected: 0 });
-    expect(res.body.results[0]).toEqual({ id: early.id, status: 'accepted', overQuota: false, flags: ['outside_field_dates'] });
+    expect(res.body.results[0]).toEqual({ id: early.id, status: 'accepted', overQuota: false, overQuotaCells: [], flags: ['outside_field_dates'] });
     expect(await storedFlags(late.id)).toEqual(['outside_field_dates']);
   });
 

@@ -70,7 +70,7 @@ describe('one bad item never blocks a batch', () => {
     expect(res.status).toBe(200);
     expect(res.body.results).toEqual([
       { id: lone.id, status: 'rejected', reason: 'the project has no quota targets yet, so a complete cannot be counted' },
-      { id: refusal.id, status: 'accepted', overQuota: false, flags: [] },
+      { id: refusal.id, status: 'accepted', overQuota: false, overQuotaCells: [], flags: [] },
     ]);
     expect(await rowCount([lone.id, refusal.id])).toBe(1);
   });
@@ -163,7 +163,7 @@ describe('ids compared as UUIDs', () => {
     const other = { ...complete(pick(targets, { age: '18-34', sex: 'female', region: 'North' })), id: item.id.toUpperCase() };
     const res = await interviewer.post(syncPath, { interviews: [item, { ...item, id: item.id.toUpperCase() }, other] });
     expect(res.body.results).toEqual([
-      { id: item.id, status: 'accepted', overQuota: false, flags: [] },
+      { id: item.id, status: 'accepted', overQuota: false, overQuotaCells: [], flags: [] },
       { id: item.id, status: 'duplicate' },
       { id: item.id, status: 'rejected', reason: 'another interview in this batch has the same id' },
     ]);

@@ -20,7 +20,7 @@ import { insertAll, insertGuarded, type NewInterview } from './guarded-insert.js
 import { checkCategories, checkItem, type CheckedItem } from './item-check.js';
 
 export type SyncResult =
-  | { id: string | null; status: 'accepted'; overQuota: boolean; flags: FlagCode[] }
+  | { id: string | null; status: 'accepted'; overQuota: boolean; overQuotaCells: string[]; flags: FlagCode[] }
   | { id: string | null; status: 'duplicate' }
   | { id: string | null; status: 'rejected'; reason: string };
 
@@ -120,12 +120,13 @@ export class SyncService {
       const categories = checkCategories(item, targets);
       if (!Array.isArray(categories)) return { id: item.id, status: 'rejected', reason: categories.reason };
       firstCopy.set(item.id, { index, fingerprint: fingerprint(item) });
-      let overQuota = false;
+      let fullCells: string[] = [];
       if (item.disposition === 'complete') {
         const mine = cells.filter((cell) => cell.categoryIds.every((id) => categories.includes(id)));
-        overQuota = mine.some((cell) => cell.status === 'closed' || cell.achieved >= cell.target);
+        fullCells = mine.filter((cell) => cell.status === 'closed' || cell.achieved >= cell.target).map((cell) => cell.id);
         for (const cell of mine) cell.achieved += 1;
       }
+      const overQuota = fullCells.length > 0;
       const day = fieldDay(item.endedAt);
       const flags = flagsOnArrival(flagContext, day);
       rows.push({
@@ -139,9 +140,10 @@ export class SyncService {
         ended_at: item.endedAt,
         field_day: day,
         over_quota: overQuota,
+        over_quota_cells: fullCells,
         flags,
       });
-      return { id: item.id, status: 'accepted', overQuota, flags };
+      return { id: item.id, status: 'accepted', overQuota, overQuotaCells: fullCells, flags };
     });
 
     const { stored, refused } = await (guarded ? insertGuarded : insertAll)(trx, rows);
@@ -166,6 +168,6 @@ function cellsAfter(before: CellView[], stored: NewInterview[]): CellView[] {
   const completes = stored.filter((row) => row.disposition === 'complete');
   return before.map((cell) => {
     const mine = completes.filter((row) => cell.categoryIds.every((id) => row.category_ids.includes(id)));
-    return withCounts(cell, cell.achieved + mine.length, cell.overQuota + mine.filter((row) => row.over_quota).length);
+    return withCounts(cell, cell.achieved + mine.length, cell.overQuota + mine.filter((row) => row.over_quota_cells.includes(cell.id)).length);
   });
 }

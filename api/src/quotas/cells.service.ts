@@ -75,13 +75,17 @@ export class CellsService {
     const { rows } = await db.raw<{
       rows: { id: string; kind: CellView['kind']; label: string; category_ids: string[]; target: number; closed_at: Date | null; achieved: number; over_quota: number }[];
     }>(
-      `WITH g AS (SELECT category_ids, n, over_quota FROM interview_counts WHERE project_id = ? AND n > 0)
+      // An over-quota interview counts on the cell that made it so (over_quota_cells), read
+      // through a partial index: over-quota interviews are few.
+      `WITH g AS (SELECT category_ids, n FROM interview_counts WHERE project_id = ? AND n > 0),
+            o AS (SELECT cell_id, count(*) AS n FROM interviews, unnest(over_quota_cells) AS cell_id
+                   WHERE project_id = ? AND over_quota AND counted GROUP BY cell_id)
        SELECT c.id, c.kind, c.label, c.category_ids, c.target, c.closed_at,
-              coalesce(sum(g.n), 0)::int AS achieved, coalesce(sum(g.over_quota), 0)::int AS over_quota
-         FROM quota_cells c LEFT JOIN g ON g.category_ids @> c.category_ids
+              coalesce(sum(g.n), 0)::int AS achieved, coalesce(max(o.n), 0)::int AS over_quota
+         FROM quota_cells c LEFT JOIN g ON g.category_ids @> c.category_ids LEFT JOIN o ON o.cell_id = c.id
         WHERE c.project_id = ?
         GROUP BY c.id ORDER BY c.position`,
-      [projectId, projectId],
+      [projectId, projectId, projectId],
     );
     return rows.map((r) =>
       withCounts(
