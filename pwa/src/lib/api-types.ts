@@ -713,6 +713,7 @@ export interface components {
             headlineQuestion?: string;
             /** @example Vellmoor tram extension */
             name?: string;
+            status?: components["schemas"]["ProjectStatus"];
             /** @example 1200 */
             targetSize?: number;
             /**
