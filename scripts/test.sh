@@ -43,6 +43,8 @@ check typecheck-api npx tsc -p api/tsconfig.json --noEmit
 check typecheck-pwa npx tsc -p pwa/tsconfig.json --noEmit
 check typecheck-scripts npx tsc -p tsconfig.json --noEmit
 check lint npx eslint --max-warnings=0 .
+# The client's generated types (pwa/src/lib/api-types.ts) must match the API's OpenAPI document.
+check api-types npx tsx scripts/api-types.ts --check
 suite api-unit
 suite reference
 suite pwa-unit

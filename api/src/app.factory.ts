@@ -1,6 +1,6 @@
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { SwaggerModule } from '@nestjs/swagger';
 import express from 'express';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
@@ -10,6 +10,7 @@ import { bodyErrorHandler } from './common/middleware/body-errors.js';
 import { pwaFiles } from './common/middleware/pwa-files.js';
 import { readBulkhead } from './common/middleware/read-bulkhead.js';
 import { createValidationPipe } from './common/validation.js';
+import { buildOpenApiDocument } from './openapi/openapi-document.js';
 import type { AppConfig } from './config/config.js';
 
 /** Builds the whole application; main.ts and the end-to-end tests share it. */
@@ -47,13 +48,7 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
   app.useGlobalPipes(createValidationPipe());
   app.enableShutdownHooks();
 
-  const docs = new DocumentBuilder()
-    .setTitle('Plumbline API')
-    .setDescription('Fieldwork projects, quota cells, interviews, balance and benchmarks')
-    .setVersion('0.1.0')
-    .addBearerAuth()
-    .build();
-  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, docs));
+  SwaggerModule.setup('api/docs', app, () => buildOpenApiDocument(app));
 
   return app;
 }

@@ -1,5 +1,5 @@
 import { Body, Controller, Get, HttpCode, Post, UseGuards } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Public } from '../common/decorators/public.decorator.js';
 import type { AuthUser } from '../common/roles.js';
@@ -7,6 +7,7 @@ import { AuthService } from './auth.service.js';
 import { LoginDto } from './dto/login.dto.js';
 import { RefreshDto } from './dto/refresh.dto.js';
 import { SignInThrottleGuard } from './sign-in-throttle.js';
+import { SessionResponse, UserProfileResponse } from './dto/session-response.dto.js';
 
 @ApiTags('auth')
 @Controller('auth')
@@ -17,6 +18,7 @@ export class AuthController {
   @UseGuards(SignInThrottleGuard)
   @Post('login')
   @HttpCode(200)
+  @ApiOkResponse({ type: SessionResponse })
   login(@Body() dto: LoginDto) {
     return this.auth.signIn(dto.email, dto.password);
   }
@@ -24,6 +26,7 @@ export class AuthController {
   @Public()
   @Post('refresh')
   @HttpCode(200)
+  @ApiOkResponse({ type: SessionResponse })
   refresh(@Body() dto: RefreshDto) {
     return this.auth.refresh(dto.refreshToken);
   }
@@ -32,12 +35,14 @@ export class AuthController {
   @Public()
   @Post('logout')
   @HttpCode(204)
+  @ApiNoContentResponse({ description: 'Signed out' })
   async logout(@Body() dto: RefreshDto): Promise<void> {
     await this.auth.signOut(dto.refreshToken);
   }
 
   @ApiBearerAuth()
   @Get('me')
+  @ApiOkResponse({ type: UserProfileResponse })
   me(@CurrentUser() user: AuthUser) {
     return this.auth.profile(user.id);
   }

@@ -1,10 +1,11 @@
 import { Controller, Get, Param, ParseUUIDPipe } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import type { AuthUser } from '../common/roles.js';
 import { ProjectAccess } from '../projects/project-access.service.js';
 import { BalanceService } from './balance.service.js';
+import { BalanceResponse } from './dto/balance-response.dto.js';
 
 @ApiTags('balance')
 @ApiBearerAuth()
@@ -18,6 +19,7 @@ export class BalanceController {
   /** Read-only for clients of the project; interviewers do not see it. */
   @Get()
   @Roles('lead', 'admin', 'supervisor', 'client')
+  @ApiOkResponse({ type: BalanceResponse })
   async balance(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string) {
     return this.balanceService.balance(await this.access.find(user, projectId));
   }

@@ -1,8 +1,9 @@
 import { Controller, Get, Inject, ServiceUnavailableException } from '@nestjs/common';
-import { ApiTags } from '@nestjs/swagger';
+import { ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import type { Knex } from 'knex';
 import { Public } from '../common/decorators/public.decorator.js';
 import { KNEX } from '../database/database.constants.js';
+import { HealthResponse } from './dto/health-response.dto.js';
 
 @ApiTags('health')
 @Controller('health')
@@ -11,6 +12,7 @@ export class HealthController {
 
   @Public()
   @Get()
+  @ApiOkResponse({ type: HealthResponse })
   async check() {
     try {
       await this.db.raw('select 1');

@@ -1,6 +1,6 @@
 import { Body, Controller, Get, Header, HttpCode, Param, ParseUUIDPipe, Post, Res } from '@nestjs/common';
 import type { Response } from 'express';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiOkResponse, ApiProduces, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import type { AuthUser } from '../common/roles.js';
@@ -9,6 +9,8 @@ import { ProjectAccess } from '../projects/project-access.service.js';
 import { ExportService } from './export.service.js';
 import { FlagCountsService } from './flag-counts.service.js';
 import { SyncService } from './sync.service.js';
+import { FlaggedInterviewsResponse } from './dto/flags-response.dto.js';
+import { SyncReplyResponse } from './dto/sync-response.dto.js';
 
 @ApiTags('interviews')
 @ApiBearerAuth()
@@ -25,6 +27,7 @@ export class InterviewsController {
   @Post('sync')
   @HttpCode(200)
   @Roles('interviewer')
+  @ApiOkResponse({ type: SyncReplyResponse })
   sync(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Body() dto: SyncBatchDto) {
     return this.syncService.sync(user, projectId, dto.interviews);
   }
@@ -32,6 +35,7 @@ export class InterviewsController {
   /** Kept-and-flagged interviews counted by reason, for the quota board. */
   @Get('flags')
   @Roles('supervisor', 'lead', 'admin')
+  @ApiOkResponse({ type: FlaggedInterviewsResponse })
   async flags(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string) {
     await this.access.find(user, projectId);
     return this.flagCounts.counts(projectId);
@@ -41,6 +45,8 @@ export class InterviewsController {
   @Get('export.csv')
   @Roles('lead', 'admin')
   @Header('Content-Type', 'text/csv; charset=utf-8')
+  @ApiProduces('text/csv')
+  @ApiOkResponse({ schema: { type: 'string' }, description: 'CSV, one row per counted complete' })
   async export(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Res() res: Response) {
     const project = await this.access.find(user, projectId);
     res.setHeader('Content-Disposition', `attachment; filename="${project.name.replace(/[^\w.-]+/g, '-')}-interviews.csv"`);

@@ -1,6 +1,6 @@
 import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Put, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiBearerAuth, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiConsumes, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import type { AuthUser } from '../common/roles.js';
@@ -8,6 +8,8 @@ import { ProjectAccess } from '../projects/project-access.service.js';
 import { CellsService } from './cells.service.js';
 import { SaveTargetsDto } from './dto/targets.dto.js';
 import { TargetsService } from './targets.service.js';
+import { CellResponse, CellsResponse, QuotaBoardResponse } from './dto/cells-response.dto.js';
+import { ParsedTargetsResponse, TargetsResponse } from './dto/targets-response.dto.js';
 
 export const TARGETS_FILE_LIMIT = 256 * 1024;
 
@@ -22,6 +24,7 @@ export class QuotasController {
   ) {}
 
   @Get('targets')
+  @ApiOkResponse({ type: TargetsResponse })
   async getTargets(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string) {
     await this.access.find(user, projectId);
     return this.targets.get(projectId);
@@ -29,6 +32,7 @@ export class QuotasController {
 
   @Put('targets')
   @Roles('lead', 'admin')
+  @ApiOkResponse({ type: TargetsResponse })
   async saveTargets(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Body() dto: SaveTargetsDto) {
     await this.access.find(user, projectId);
     return this.targets.save(projectId, dto);
@@ -39,6 +43,7 @@ export class QuotasController {
   @HttpCode(200)
   @Roles('lead', 'admin')
   @ApiConsumes('multipart/form-data')
+  @ApiOkResponse({ type: ParsedTargetsResponse })
   @UseInterceptors(FileInterceptor('file', { limits: { fileSize: TARGETS_FILE_LIMIT, files: 1 } }))
   async parseTargets(
     @CurrentUser() user: AuthUser,
@@ -51,6 +56,7 @@ export class QuotasController {
   }
 
   @Get('cells')
+  @ApiOkResponse({ type: CellsResponse })
   async getCells(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string) {
     await this.access.find(user, projectId);
     return this.cells.cells(projectId);
@@ -58,6 +64,7 @@ export class QuotasController {
 
   @Get('quota-board')
   @Roles('supervisor', 'lead', 'admin')
+  @ApiOkResponse({ type: QuotaBoardResponse })
   async board(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string) {
     const project = await this.access.find(user, projectId);
     const { cells, interviewers } = await this.cells.board(projectId, project.time_zone);
@@ -67,6 +74,7 @@ export class QuotasController {
   @Post('cells/:cellId/close')
   @HttpCode(200)
   @Roles('supervisor', 'lead')
+  @ApiOkResponse({ type: CellResponse })
   async close(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Param('cellId', ParseUUIDPipe) cellId: string) {
     await this.access.find(user, projectId);
     return this.cells.setClosed(user, projectId, cellId, true);
@@ -75,6 +83,7 @@ export class QuotasController {
   @Post('cells/:cellId/reopen')
   @HttpCode(200)
   @Roles('supervisor', 'lead')
+  @ApiOkResponse({ type: CellResponse })
   async reopen(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Param('cellId', ParseUUIDPipe) cellId: string) {
     await this.access.find(user, projectId);
     return this.cells.setClosed(user, projectId, cellId, false);

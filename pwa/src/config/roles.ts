@@ -1,5 +1,8 @@
-export const roles = ['admin', 'lead', 'supervisor', 'interviewer', 'client'] as const;
-export type Role = (typeof roles)[number];
+import type { Role } from '../lib/api-types';
+
+export type { Role };
+/** Every role the server knows (its Role enum); roleLabels must name each one. */
+export const roles = ['admin', 'lead', 'supervisor', 'interviewer', 'client'] as const satisfies readonly Role[];
 
 export const roleLabels: Record<Role, string> = {
   admin: 'Administrator',

@@ -13,17 +13,12 @@
 //                 deletes the draft in one transaction.
 // Everything here works offline; nothing here is ever sent except by the sync module.
 import { Dexie, type EntityTable, type Table } from 'dexie';
-import type { Role } from '../config/roles';
+import type { UserProfileResponse } from '../lib/api-types';
 import type { CellStatus, QuotaCell, QuotaVariable } from '../lib/cells';
 import type { Project } from '../lib/projects/get-projects';
 
-export interface SessionUser {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  organisation: { id: string; name: string };
-}
+/** The signed-in person as the server gave them at sign-in. */
+export type SessionUser = UserProfileResponse;
 
 export interface StoredSession {
   id: 'current';
@@ -83,7 +78,7 @@ export interface MetaEntry {
 }
 
 /** A project as GET /api/projects lists it, kept on the device for offline use. */
-export type FieldProject = Project & { headlineQuestion: string };
+export type FieldProject = Project;
 
 export interface CachedProject {
   userId: string;

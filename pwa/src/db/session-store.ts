@@ -1,7 +1,8 @@
 // The signed-in session on this device (table `session`, one row). Read on every API
 // request for the bearer token; kept across reloads and offline restarts.
 import { useLiveQuery } from 'dexie-react-hooks';
-import { db, type SessionUser, type StoredSession } from './plumbline-db';
+import type { SessionResponse } from '../lib/api-types';
+import { db, type StoredSession } from './plumbline-db';
 
 const key = 'current' as const;
 
@@ -9,12 +10,7 @@ export async function readSession(): Promise<StoredSession | undefined> {
   return db.session.get(key);
 }
 
-export async function saveSession(tokens: {
-  accessToken: string;
-  refreshToken: string;
-  expiresIn: number;
-  user: SessionUser;
-}): Promise<StoredSession> {
+export async function saveSession(tokens: SessionResponse): Promise<StoredSession> {
   const row: StoredSession = {
     id: key,
     accessToken: tokens.accessToken,

@@ -8,18 +8,14 @@
 // means it is not, and the request fails with an ApiError of kind 'offline'. Nothing is
 // lost offline: the device's own data lives in Dexie, not here.
 import { clearSession, readSession, saveSession } from '../db/session-store';
-import type { SessionUser } from '../db/plumbline-db';
 import { ApiError, offlineMessage, signedOutMessage, type FieldProblem } from './api-error';
+import type { SessionResponse } from './api-types';
 import { reportReached, reportUnreachable } from './reachability';
 
 const basePath = '/api';
 
-export interface AuthResponse {
-  accessToken: string;
-  refreshToken: string;
-  expiresIn: number;
-  user: SessionUser;
-}
+/** The answer to sign-in and refresh: tokens and the signed-in person. */
+export type AuthResponse = SessionResponse;
 
 export interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';

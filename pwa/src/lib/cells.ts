@@ -1,25 +1,8 @@
 // The quota cell as the server reports it (GET cells, the quota board and every sync
-// reply), shared by the interviewer's device cache and the office screens.
+// reply), shared by the interviewer's device cache and the office screens. The shapes are
+// generated from the API's OpenAPI document (lib/api-types.ts).
+import type { CellResponse, CellStatus, QuotaVariableResponse } from './api-types';
 
-export type CellStatus = 'open' | 'nearly_full' | 'full' | 'closed';
-
-export interface QuotaVariable {
-  id: string;
-  name: string;
-  interlocked: boolean;
-  categories: { id: string; label: string }[];
-}
-
-export interface QuotaCell {
-  id: string;
-  kind: 'interlocked' | 'margin';
-  label: string;
-  categoryIds: string[];
-  target: number;
-  achieved: number;
-  overQuota: number;
-  remaining: number;
-  fillRate: number;
-  status: CellStatus;
-  closedAt: string | null;
-}
+export type { CellStatus };
+export type QuotaVariable = QuotaVariableResponse;
+export type QuotaCell = CellResponse;

@@ -10,11 +10,12 @@ export const tramProject: FieldProject = {
   targetSize: 100,
   status: 'fieldwork',
   headlineQuestion: 'Do you support extending the tram line?',
+  timeZone: 'Europe/London',
 };
 
 export const tramVariables: QuotaVariable[] = [
-  { id: 'v-age', name: 'age_band', interlocked: false, categories: [{ id: 'c-young', label: '18-34' }, { id: 'c-old', label: '35+' }] },
-  { id: 'v-region', name: 'region', interlocked: false, categories: [{ id: 'c-mardon', label: 'Mardon' }, { id: 'c-quay', label: 'Old Quay' }] },
+  { id: 'v-age', name: 'age_band', interlocked: false, categories: [{ id: 'c-young', label: '18-34', share: 0.4 }, { id: 'c-old', label: '35+', share: 0.6 }] },
+  { id: 'v-region', name: 'region', interlocked: false, categories: [{ id: 'c-mardon', label: 'Mardon', share: 0.7 }, { id: 'c-quay', label: 'Old Quay', share: 0.3 }] },
 ];
 
 export function cell(id: string, label: string, categoryIds: string[], target: number, achieved: number, closedAt: string | null = null): QuotaCell {

@@ -2,18 +2,9 @@
 // Shared (lib) because the project picker of several features reads the same list.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../api-client';
+import type { ProjectResponse } from '../api-types';
 
-export interface Project {
-  id: string;
-  name: string;
-  topic: string;
-  fieldStart: string | null;
-  fieldEnd: string | null;
-  targetSize: number;
-  status: 'setup' | 'fieldwork' | 'closed' | string;
-  headlineQuestion?: string;
-  timeZone?: string;
-}
+export type Project = ProjectResponse;
 
 export const projectKeys = {
   all: ['projects'] as const,

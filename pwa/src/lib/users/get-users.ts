@@ -1,15 +1,9 @@
 // GET /api/users (admin and lead): the organisation's accounts. Server data: query cache only.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../api-client';
-import type { Role } from '../../config/roles';
+import type { UserResponse } from '../api-types';
 
-export interface OrganisationUser {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  createdAt: string;
-}
+export type OrganisationUser = UserResponse;
 
 export const userKeys = {
   all: ['users'] as const,

@@ -2,13 +2,9 @@
 // answer to the device (db/cache-store) so cell status is known offline.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../lib/api-client';
-import type { QuotaCell, QuotaVariable } from '../../db/plumbline-db';
+import type { CellsResponse } from '../../lib/api-types';
 
-export interface ProjectCells {
-  variables: QuotaVariable[];
-  cells: QuotaCell[];
-  refreshedAt: string;
-}
+export type ProjectCells = CellsResponse;
 
 export const projectCellKeys = {
   all: ['projects'] as const,

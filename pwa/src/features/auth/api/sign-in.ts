@@ -2,12 +2,10 @@
 // (Dexie), which is what flips the app from the sign-in page to the role's home.
 import { useMutation } from '@tanstack/react-query';
 import { apiRequest, type AuthResponse } from '../../../lib/api-client';
+import type { LoginDto } from '../../../lib/api-types';
 import { saveSession } from '../../../db/session-store';
 
-export interface Credentials {
-  email: string;
-  password: string;
-}
+export type Credentials = LoginDto;
 
 export async function signIn(credentials: Credentials): Promise<AuthResponse> {
   const response = await apiRequest<AuthResponse>('/auth/login', {

@@ -2,51 +2,12 @@
 // completed interviews. Server data: query cache only; refreshed every minute while open.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import type { BalanceMarginResponse, BalanceOutcomeResponse, BalanceResponse } from '../../../lib/api-types';
 
-export interface BalanceMargin {
-  variable: string;
-  category: string;
-  /** Proportions (0–1), as everywhere in the code; the screen shows percentages. */
-  target: number;
-  unweighted: number;
-  weighted: number | null;
-}
-
-export interface BalanceOutcome {
-  column: string;
-  unweighted: number;
-  weighted?: number;
-  /** Standard error of the weighted share, linearised through the raking. */
-  standardError?: number | null;
-  /** Korn–Graubard 95% interval of the weighted share. */
-  interval?: [number, number] | null;
-  method?: string;
-  /** 1.96 standard errors; shown only when the interval is near symmetric. */
-  marginOfError?: number | null;
-  impliedBiasFactor?: number | null;
-  impliedBiasFactorInterval?: [number, number] | null;
-}
-
-export interface Balance {
-  projectId: string;
-  headlineQuestion: string;
-  n: number;
-  excluded: number;
-  converged: boolean | null;
-  iterations: number | null;
-  designEffect: number | null;
-  effectiveSampleSize: number | null;
-  weightMin: number | null;
-  weightMax: number | null;
-  maxMarginError: number | null;
-  margins: BalanceMargin[];
-  outcome: BalanceOutcome | null;
-  /** Why weights cannot be computed yet, in a sentence for the reader; null when they were. */
-  weightingProblem: string | null;
-  /** Figures not given because they cannot be trusted, each with the reason (absent from older servers). */
-  withheld?: { figure: string; reason: string }[];
-  computedAt: string;
-}
+/** Shares are proportions (0–1), as everywhere in the code; the screen shows percentages. */
+export type Balance = BalanceResponse;
+export type BalanceMargin = BalanceMarginResponse;
+export type BalanceOutcome = BalanceOutcomeResponse;
 
 export const balanceKeys = {
   all: ['balance'] as const,

@@ -1,21 +1,10 @@
 // GET /api/projects/:id/cells: the cell targets the server allocated from the quota targets.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import type { CellResponse, CellsResponse } from '../../../lib/api-types';
 
-export interface ProjectCell {
-  id: string;
-  kind: 'interlocked' | 'margin';
-  label: string;
-  target: number;
-  achieved: number;
-  status: 'open' | 'nearly_full' | 'full' | 'closed';
-}
-
-export interface ProjectCells {
-  variables: { id: string; name: string; interlocked: boolean }[];
-  cells: ProjectCell[];
-  refreshedAt: string;
-}
+export type ProjectCell = CellResponse;
+export type ProjectCells = CellsResponse;
 
 export const cellKeys = {
   all: ['cells'] as const,

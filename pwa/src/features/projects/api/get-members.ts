@@ -1,14 +1,9 @@
 // GET /api/projects/:id/members: who is assigned to the project.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import type { Role } from '../../../config/roles';
+import type { ProjectMemberResponse } from '../../../lib/api-types';
 
-export interface Member {
-  id: string;
-  name: string;
-  email: string;
-  role: Role;
-}
+export type Member = ProjectMemberResponse;
 
 export const memberKeys = {
   all: ['members'] as const,

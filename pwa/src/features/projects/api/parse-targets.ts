@@ -2,12 +2,12 @@
 // returns it for review. Nothing is saved, so nothing in the cache changes.
 import { useMutation } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import type { Targets } from './get-targets';
+import type { ParsedTargetsResponse } from '../../../lib/api-types';
 
-export function parseTargets(projectId: string, file: File): Promise<Targets> {
+export function parseTargets(projectId: string, file: File): Promise<ParsedTargetsResponse> {
   const form = new FormData();
   form.append('file', file);
-  return apiRequest<Targets>(`/projects/${projectId}/targets/parse`, { method: 'POST', body: form });
+  return apiRequest<ParsedTargetsResponse>(`/projects/${projectId}/targets/parse`, { method: 'POST', body: form });
 }
 
 export function useParseTargets(projectId: string) {

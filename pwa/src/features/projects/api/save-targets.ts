@@ -3,10 +3,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import { cellKeys } from './get-cells';
-import { targetKeys, type Targets } from './get-targets';
+import { targetKeys, type SavedTargets, type Targets } from './get-targets';
 
-export function saveTargets(projectId: string, targets: Targets): Promise<Targets> {
-  return apiRequest<Targets>(`/projects/${projectId}/targets`, { method: 'PUT', body: targets });
+export function saveTargets(projectId: string, targets: Targets): Promise<SavedTargets> {
+  return apiRequest<SavedTargets>(`/projects/${projectId}/targets`, { method: 'PUT', body: targets });
 }
 
 export function useSaveTargets(projectId: string) {

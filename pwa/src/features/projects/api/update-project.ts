@@ -2,12 +2,12 @@
 // cells on the server, so the project's cells are refetched too.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import type { ProjectStatus, UpdateProjectDto } from '../../../lib/api-types';
 import { projectKeys, type Project } from '../../../lib/projects/get-projects';
-import type { NewProject } from './create-project';
 import { cellKeys } from './get-cells';
 
-export type ProjectStatus = 'setup' | 'fieldwork' | 'closed';
-export type ProjectChanges = Partial<NewProject> & { status?: ProjectStatus };
+export type { ProjectStatus };
+export type ProjectChanges = UpdateProjectDto;
 
 export function updateProject(projectId: string, changes: ProjectChanges): Promise<Project> {
   return apiRequest<Project>(`/projects/${projectId}`, { method: 'PATCH', body: changes });

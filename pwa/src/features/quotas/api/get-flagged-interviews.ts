@@ -3,13 +3,11 @@
 // by reason. Server data: query cache only; it refreshes with the quota board.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import type { FlaggedInterviewsResponse } from '../../../lib/api-types';
 import { boardRefreshMs } from './get-quota-board';
 
-export interface FlaggedInterviews {
-  /** Interviews with at least one flag; one interview may carry several. */
-  total: number;
-  byReason: { code: string; reason: string; count: number }[];
-}
+/** Interviews with at least one flag (one interview may carry several), counted by reason. */
+export type FlaggedInterviews = FlaggedInterviewsResponse;
 
 export const flaggedInterviewsKeys = {
   all: ['flagged-interviews'] as const,

@@ -3,27 +3,13 @@
 // 30 seconds while the page is open and whenever the window regains focus.
 import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import type { InterviewerProgressResponse, QuotaBoardResponse } from '../../../lib/api-types';
 import type { CellStatus, QuotaCell } from '../../../lib/cells';
 
 export type { CellStatus };
 export type Cell = QuotaCell;
-
-export interface InterviewerProgress {
-  id: string;
-  name: string;
-  completesToday: number;
-  completesTotal: number;
-  contactsTotal: number;
-  overQuota: number;
-}
-
-export interface QuotaBoard {
-  projectId: string;
-  targetSize: number;
-  cells: Cell[];
-  interviewers: InterviewerProgress[];
-  refreshedAt: string;
-}
+export type InterviewerProgress = InterviewerProgressResponse;
+export type QuotaBoard = QuotaBoardResponse;
 
 export const boardRefreshMs = 30_000;
 

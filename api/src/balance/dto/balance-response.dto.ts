@@ -1,0 +1,117 @@
+import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
+import { WITHHELD_FIGURES, type WithheldFigure, type WithheldFigureName } from '../../estimation/withheld.js';
+import type { Balance, BalanceMargin } from '../balance.service.js';
+
+// Shares are proportions (0–1) everywhere; docs/methods.md defines every figure.
+
+export class BalanceMarginResponse implements BalanceMargin {
+  @ApiProperty({ example: 'age band' })
+  variable: string;
+
+  @ApiProperty({ example: '18-24' })
+  category: string;
+
+  @ApiProperty({ description: 'Population share' })
+  target: number;
+
+  @ApiProperty({ description: 'Share among the counted completes' })
+  unweighted: number;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'Share after raking; null until weights can be computed' })
+  weighted: number | null;
+}
+
+const pair: ApiPropertyOptions = { type: [Number], minItems: 2, maxItems: 2, nullable: true };
+
+/** The headline share; the weighted figures are absent until weights can be computed. */
+export class BalanceOutcomeResponse {
+  @ApiProperty({ example: 'headline' })
+  column: string;
+
+  @ApiProperty()
+  unweighted: number;
+
+  @ApiPropertyOptional()
+  weighted?: number;
+
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Standard error of the weighted share, linearised through the raking' })
+  standardError?: number | null;
+
+  @ApiPropertyOptional({ ...pair, description: 'Korn–Graubard 95% interval [lower, upper] of the weighted share' })
+  interval?: [number, number] | null;
+
+  @ApiPropertyOptional({ description: 'How standardError and interval were computed' })
+  method?: string;
+
+  @ApiPropertyOptional({ type: Number, nullable: true, description: '1.96 standard errors; meaningful only when the interval is near symmetric' })
+  marginOfError?: number | null;
+
+  @ApiPropertyOptional({ type: Number, nullable: true })
+  impliedBiasFactor?: number | null;
+
+  @ApiPropertyOptional({ ...pair, description: "Interval of the implied bias factor" })
+  impliedBiasFactorInterval?: [number, number] | null;
+
+  @ApiPropertyOptional({ description: "How the bias factor's interval was computed" })
+  impliedBiasFactorMethod?: string;
+}
+
+export class WithheldFigureResponse implements WithheldFigure {
+  @ApiProperty({ enum: WITHHELD_FIGURES, enumName: 'WithheldFigureName' })
+  figure: WithheldFigureName;
+
+  @ApiProperty()
+  reason: string;
+}
+
+const nullableNumber = { type: Number, nullable: true } as const;
+
+export class BalanceResponse implements Balance {
+  @ApiProperty({ format: 'uuid' })
+  projectId: string;
+
+  @ApiProperty()
+  headlineQuestion: string;
+
+  @ApiProperty({ description: 'Completed interviews used (not rejected, with a category on every current variable)' })
+  n: number;
+
+  @ApiProperty({ description: 'Completes left out because they lack a category of a variable added later' })
+  excluded: number;
+
+  @ApiProperty({ type: Boolean, nullable: true })
+  converged: boolean | null;
+
+  @ApiProperty(nullableNumber)
+  iterations: number | null;
+
+  @ApiProperty({ ...nullableNumber, description: "Kish's design effect of the weights" })
+  designEffect: number | null;
+
+  @ApiProperty(nullableNumber)
+  effectiveSampleSize: number | null;
+
+  @ApiProperty(nullableNumber)
+  weightMin: number | null;
+
+  @ApiProperty(nullableNumber)
+  weightMax: number | null;
+
+  @ApiProperty(nullableNumber)
+  maxMarginError: number | null;
+
+  @ApiProperty({ type: () => [BalanceMarginResponse] })
+  margins: BalanceMarginResponse[];
+
+  @ApiProperty({ type: () => BalanceOutcomeResponse, nullable: true, description: 'Null before the first counted complete' })
+  outcome: BalanceOutcomeResponse | null;
+
+  @ApiProperty({ type: String, nullable: true, description: 'Why no weights could be computed yet, in words for the lead; null when they were' })
+  weightingProblem: string | null;
+
+  @ApiProperty({ type: () => [WithheldFigureResponse], description: 'Figures not given because they cannot be trusted, each with its reason' })
+  withheld: WithheldFigureResponse[];
+
+  @ApiProperty({ format: 'date-time' })
+  computedAt: string;
+}

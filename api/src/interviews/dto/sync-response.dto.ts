@@ -1,0 +1,61 @@
+import { ApiExtraModels, ApiProperty, getSchemaPath } from '@nestjs/swagger';
+import { CellResponse } from '../../quotas/dto/cells-response.dto.js';
+import { FLAG_CODES, type FlagCode } from '../flags.js';
+import type { SyncReply } from '../sync.service.js';
+
+export class AcceptedItemResponse {
+  @ApiProperty({ type: String, format: 'uuid', nullable: true, description: 'The id sent, in lower case' })
+  id: string | null;
+
+  @ApiProperty({ enum: ['accepted'] })
+  status: 'accepted';
+
+  @ApiProperty({ description: 'The cell was already full when it arrived' })
+  overQuota: boolean;
+
+  @ApiProperty({ enum: FLAG_CODES, enumName: 'FlagCode', isArray: true, description: 'Kept but flagged for the supervisor' })
+  flags: FlagCode[];
+}
+
+export class DuplicateItemResponse {
+  @ApiProperty({ type: String, format: 'uuid', nullable: true })
+  id: string | null;
+
+  @ApiProperty({ enum: ['duplicate'], description: 'Already stored from this interviewer' })
+  status: 'duplicate';
+}
+
+export class RejectedItemResponse {
+  @ApiProperty({ type: String, nullable: true, description: 'The id sent, or null when it was unreadable' })
+  id: string | null;
+
+  @ApiProperty({ enum: ['rejected'] })
+  status: 'rejected';
+
+  @ApiProperty({ description: 'Why, in plain words for the interviewer' })
+  reason: string;
+}
+
+const itemResults = [AcceptedItemResponse, DuplicateItemResponse, RejectedItemResponse];
+
+@ApiExtraModels(...itemResults)
+export class SyncReplyResponse implements SyncReply {
+  @ApiProperty({
+    type: 'array',
+    items: { oneOf: itemResults.map((model) => ({ $ref: getSchemaPath(model) })) },
+    description: 'One result per item, in the order sent',
+  })
+  results: (AcceptedItemResponse | DuplicateItemResponse | RejectedItemResponse)[];
+
+  @ApiProperty()
+  accepted: number;
+
+  @ApiProperty()
+  duplicates: number;
+
+  @ApiProperty()
+  rejected: number;
+
+  @ApiProperty({ type: () => [CellResponse], description: "The project's cells after the batch" })
+  cells: CellResponse[];
+}

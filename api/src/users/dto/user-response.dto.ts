@@ -1,0 +1,24 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { ROLES, type Role } from '../../common/roles.js';
+import type { UserSummary } from '../users.repository.js';
+
+/** An account of the organisation as the admin's list shows it. */
+export class UserResponse implements UserSummary {
+  @ApiProperty({ format: 'uuid' })
+  id: string;
+
+  @ApiProperty({ example: 'a.fenwick@vellmoor.example' })
+  email: string;
+
+  @ApiProperty({ example: 'Ada Fenwick' })
+  name: string;
+
+  @ApiProperty({ enum: ROLES, enumName: 'Role' })
+  role: Role;
+
+  @ApiProperty({ description: 'False when the account is disabled' })
+  active: boolean;
+
+  @ApiProperty({ format: 'date-time' })
+  createdAt: string;
+}
