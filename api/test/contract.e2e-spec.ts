@@ -68,7 +68,7 @@ describe('answers match the OpenAPI document', () => {
   it('projects and members', async () => {
     conforms(await lead.get('/api/projects'), 'get', '/api/projects', 200);
     conforms(await lead.post('/api/projects', { name: 'Contract check', fieldStart: '2026-12-01', fieldEnd: '2026-12-20', targetSize: 60, headlineQuestion: 'Keep it?', timeZone: 'Europe/London' }), 'post', '/api/projects', 201);
-    conforms(await lead.patch(project(), { targetSize: 60, headlineQuestion: 'Support?', status: 'fieldwork' }), 'patch', '/api/projects/{id}', 200);
+    conforms(await lead.patch(project(), { targetSize: 60, headlineQuestion: 'Support?' }), 'patch', '/api/projects/{id}', 200);
     conforms(await lead.get(project()), 'get', '/api/projects/{id}', 200);
     conforms(await lead.put(`${project()}/members`, { userIds: [org.users.interviewer.id, org.users.client.id, org.users.supervisor.id] }), 'put', '/api/projects/{id}/members', 200);
     conforms(await lead.get(`${project()}/members`), 'get', '/api/projects/{id}/members', 200);

@@ -333,8 +333,10 @@ export interface components {
              * @description The id sent, in lower case
              */
             id: string | null;
-            /** @description The cell was already full when it arrived */
+            /** @description One of its cells was full or closed when it arrived */
             overQuota: boolean;
+            /** @description The cells that were full or closed when it arrived (empty when not over quota) */
+            overQuotaCells: string[];
             /** @enum {string} */
             status: "accepted";
         };

@@ -10,8 +10,11 @@ export class AcceptedItemResponse {
   @ApiProperty({ enum: ['accepted'] })
   status: 'accepted';
 
-  @ApiProperty({ description: 'The cell was already full when it arrived' })
+  @ApiProperty({ description: 'One of its cells was full or closed when it arrived' })
   overQuota: boolean;
+
+  @ApiProperty({ type: String, format: 'uuid', isArray: true, description: 'The cells that were full or closed when it arrived (empty when not over quota)' })
+  overQuotaCells: string[];
 
   @ApiProperty({ enum: FLAG_CODES, enumName: 'FlagCode', isArray: true, description: 'Kept but flagged for the supervisor' })
   flags: FlagCode[];
