@@ -10,6 +10,8 @@ import * as m0005 from './20261202000500_project_time_zone.js';
 import * as m0006 from './20261202000600_interview_flags.js';
 import * as m0007 from './20261202000700_interview_count_tables.js';
 import * as m0008 from './20261202000800_joint_shares.js';
+import * as m0010 from './20261202001000_sessions.js';
+import * as m0011 from './20261202001010_sign_in_failures.js';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000100_organisations_and_users': m0001,
@@ -20,6 +22,8 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202000600_interview_flags': m0006,
   '20261202000700_interview_count_tables': m0007,
   '20261202000800_joint_shares': m0008,
+  '20261202001000_sessions': m0010,
+  '20261202001010_sign_in_failures': m0011,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {
