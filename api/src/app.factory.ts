@@ -7,6 +7,7 @@ import { Logger } from 'nestjs-pino';
 import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
 import { bodyErrorHandler } from './common/middleware/body-errors.js';
+import { hsts } from './common/middleware/hsts.js';
 import { pwaFiles } from './common/middleware/pwa-files.js';
 import { readBulkhead } from './common/middleware/read-bulkhead.js';
 import { createValidationPipe } from './common/validation.js';
@@ -19,7 +20,8 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
     bufferLogs: true,
   });
   app.useLogger(app.get(Logger));
-  app.set('trust proxy', 'loopback');
+  // Off unless TRUST_PROXY names the proxies in front (config/trust-proxy.ts).
+  app.set('trust proxy', config.trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -36,8 +38,11 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
           'upgrade-insecure-requests': null,
         },
       },
+      // Sent by common/middleware/hsts.ts, and only over HTTPS.
+      strictTransportSecurity: false,
     }),
   );
+  app.use(hsts(config.tlsInFront));
   if (config.pwaDist) app.use(pwaFiles(config.pwaDist));
   // Four reads at a time keep both cores busy while a sync never waits behind a crowd of polls.
   app.use(readBulkhead(4));
@@ -47,6 +52,12 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
   app.useGlobalPipes(createValidationPipe());
   app.enableShutdownHooks();
 
+  if (config.apiDocs) setupDocs(app);
+  return app;
+}
+
+/** The OpenAPI page and document at /api/docs (API_DOCS=false leaves them out). */
+function setupDocs(app: NestExpressApplication): void {
   const docs = new DocumentBuilder()
     .setTitle('Plumbline API')
     .setDescription('Fieldwork projects, quota cells, interviews, balance and benchmarks')
@@ -54,6 +65,4 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
     .addBearerAuth()
     .build();
   SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, docs));
-
-  return app;
 }
