@@ -51,9 +51,9 @@ export class SignInFailuresRepository {
   }
 
   /** A successful sign-in: the account's counter starts over; the address's attempt is taken back. */
-  async forgive(reset: string, takeBack: string[]): Promise<void> {
+  async forgive(reset: string[], takeBack: string[]): Promise<void> {
     await this.db.transaction(async (trx) => {
-      await trx('sign_in_failures').where({ key: reset }).delete();
+      await trx('sign_in_failures').whereIn('key', reset).delete();
       if (takeBack.length > 0) {
         await trx('sign_in_failures')
           .whereIn('key', takeBack)

@@ -30,9 +30,12 @@ export class SignInLimiter {
     }
   }
 
+  /** A success resets the account's counter (and the device's) and takes back the address's count. */
   async succeeded(attempt: Attempt): Promise<void> {
-    const [own, ...others] = this.keys(attempt);
-    await this.failures.forgive(own!.key, others.map((k) => k.key));
+    const counted = this.keys(attempt).map((k) => k.key);
+    const reset = counted.filter((k) => !k.startsWith('address:'));
+    if (!reset.includes(`account:${attempt.account}`)) reset.push(`account:${attempt.account}`);
+    await this.failures.forgive(reset, counted.filter((k) => k.startsWith('address:')));
   }
 
   /** The attempt's own counter (account, or device and account) first, then the address's. */
