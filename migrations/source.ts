@@ -11,6 +11,8 @@ import * as m0006 from './20261202000600_interview_flags.js';
 import * as m0007 from './20261202000700_interview_count_tables.js';
 import * as m0008 from './20261202000800_joint_shares.js';
 import * as m0009 from './20261202000900_over_quota_cells.js';
+import * as m0010 from './20261202001000_sessions.js';
+import * as m0011 from './20261202001010_sign_in_failures.js';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000100_organisations_and_users': m0001,
@@ -22,6 +24,8 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202000700_interview_count_tables': m0007,
   '20261202000800_joint_shares': m0008,
   '20261202000900_over_quota_cells': m0009,
+  '20261202001000_sessions': m0010,
+  '20261202001010_sign_in_failures': m0011,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -7,6 +7,7 @@ import { Logger } from 'nestjs-pino';
 import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
 import { bodyErrorHandler } from './common/middleware/body-errors.js';
+import { hsts } from './common/middleware/hsts.js';
 import { pwaFiles } from './common/middleware/pwa-files.js';
 import { readBulkhead } from './common/middleware/read-bulkhead.js';
 import { createValidationPipe } from './common/validation.js';
@@ -20,7 +21,8 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
     bufferLogs: true,
   });
   app.useLogger(app.get(Logger));
-  app.set('trust proxy', 'loopback');
+  // Off unless TRUST_PROXY names the proxies in front (config/trust-proxy.ts).
+  app.set('trust proxy', config.trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -37,8 +39,11 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
           'upgrade-insecure-requests': null,
         },
       },
+      // Sent by common/middleware/hsts.ts, and only over HTTPS.
+      strictTransportSecurity: false,
     }),
   );
+  app.use(hsts(config.tlsInFront));
   if (config.pwaDist) app.use(pwaFiles(config.pwaDist));
   // Four reads at a time keep both cores busy while a sync never waits behind a crowd of polls.
   app.use(readBulkhead(4));
@@ -48,7 +53,7 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
   app.useGlobalPipes(createValidationPipe());
   app.enableShutdownHooks();
 
-  SwaggerModule.setup('api/docs', app, () => buildOpenApiDocument(app));
-
+  // The OpenAPI page and document at /api/docs (API_DOCS=false leaves them out).
+  if (config.apiDocs) SwaggerModule.setup('api/docs', app, () => buildOpenApiDocument(app));
   return app;
 }

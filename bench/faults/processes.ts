@@ -37,8 +37,6 @@ export class ApiProcess {
         HOST: '127.0.0.1',
         JWT_SECRET: 'fault-suite-secret-0123456789abcdefghijkl',
         LOG_LEVEL: 'error',
-        // Twenty devices sign in from one loopback address.
-        SIGNIN_LIMIT: '1000',
       },
       stdio: ['ignore', 'ignore', 'inherit'],
     });

@@ -34,7 +34,6 @@ export async function setup(project: TestProject): Promise<void> {
       PWA_DIST: join(root, 'pwa/dist'),
       JWT_SECRET: 'browser-suite-secret-0123456789abcdef',
       LOG_LEVEL: 'warn',
-      SIGNIN_LIMIT: '200',
     },
     stdio: ['ignore', 'inherit', 'inherit'],
   });

@@ -1,7 +1,6 @@
 import { Module } from '@nestjs/common';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
-import { ThrottlerModule } from '@nestjs/throttler';
 import { APP_CONFIG } from '../config/config.constants.js';
 import type { AppConfig } from '../config/config.js';
 import { UsersModule } from '../users/users.module.js';
@@ -9,7 +8,9 @@ import { AuthController } from './auth.controller.js';
 import { AuthService } from './auth.service.js';
 import { JwtStrategy } from './jwt.strategy.js';
 import { RefreshTokensRepository } from './refresh-tokens.repository.js';
-import { PostgresThrottlerStorage, SignInThrottleGuard, ThrottleStorageModule } from './sign-in-throttle.js';
+import { DeviceCookies } from './device-cookie.js';
+import { SignInFailuresRepository } from './sign-in-failures.repository.js';
+import { SignInLimiter } from './sign-in-limiter.js';
 
 @Module({
   imports: [
@@ -19,16 +20,9 @@ import { PostgresThrottlerStorage, SignInThrottleGuard, ThrottleStorageModule } 
       inject: [APP_CONFIG],
       useFactory: (config: AppConfig) => ({ secret: config.jwtSecret, signOptions: { algorithm: 'HS256' } }),
     }),
-    ThrottlerModule.forRootAsync({
-      imports: [ThrottleStorageModule],
-      inject: [APP_CONFIG, PostgresThrottlerStorage],
-      useFactory: (config: AppConfig, storage: PostgresThrottlerStorage) => ({
-        throttlers: [{ name: 'sign-in', ttl: config.signInWindowSeconds * 1000, limit: config.signInLimit }],
-        storage,
-      }),
-    }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy, RefreshTokensRepository, SignInThrottleGuard],
+  providers: [AuthService, JwtStrategy, RefreshTokensRepository, SignInFailuresRepository, SignInLimiter, DeviceCookies],
+  exports: [RefreshTokensRepository],
 })
 export class AuthModule {}

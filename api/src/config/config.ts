@@ -1,5 +1,9 @@
 // Configuration is read from the environment once, at start-up, and validated here.
 // A missing or malformed value stops the server with a message naming the variable.
+import { ConfigError } from './config-error.js';
+import { parseTrustProxy, type TrustProxy } from './trust-proxy.js';
+
+export { ConfigError };
 
 export interface AppConfig {
   host: string;
@@ -8,14 +12,20 @@ export interface AppConfig {
   jwtSecret: string;
   accessTokenTtlSeconds: number;
   refreshTokenTtlSeconds: number;
-  signInLimit: number;
-  signInWindowSeconds: number;
+  /** Failed sign-ins in a row on one account before the delays start. */
+  signInFreeFailures: number;
+  /** Failed sign-ins from one address, across accounts, per window. */
+  signInAddressLimit: number;
+  signInAddressWindowSeconds: number;
+  trustProxy: TrustProxy;
+  /** TLS ends in front of the API (a proxy or load balancer): send HSTS on every answer. */
+  tlsInFront: boolean;
+  /** Serve the OpenAPI page and document at /api/docs. */
+  apiDocs: boolean;
   bodyLimit: string;
   pwaDist: string | null;
   logLevel: string;
 }
-
-export class ConfigError extends Error {}
 
 type Env = Record<string, string | undefined>;
 
@@ -26,6 +36,14 @@ function integer(env: Env, name: string, fallback: number, min: number, max: num
   const value = Number(raw);
   if (value < min || value > max) throw new ConfigError(`${name} must be between ${min} and ${max}, got ${value}`);
   return value;
+}
+
+function flag(env: Env, name: string, fallback: boolean): boolean {
+  const raw = env[name];
+  if (raw === undefined || raw === '') return fallback;
+  if (raw === 'true') return true;
+  if (raw === 'false') return false;
+  throw new ConfigError(`${name} must be true or false, got "${raw}"`);
 }
 
 function required(env: Env, name: string): string {
@@ -54,8 +72,12 @@ export function loadConfig(env: Env = process.env): AppConfig {
     jwtSecret,
     accessTokenTtlSeconds: integer(env, 'ACCESS_TOKEN_TTL', 900, 10, 86_400),
     refreshTokenTtlSeconds: integer(env, 'REFRESH_TOKEN_TTL', 30 * 86_400, 60, 365 * 86_400),
-    signInLimit: integer(env, 'SIGNIN_LIMIT', 10, 1, 10_000),
-    signInWindowSeconds: integer(env, 'SIGNIN_WINDOW', 60, 1, 86_400),
+    signInFreeFailures: integer(env, 'SIGNIN_FREE_FAILURES', 5, 1, 100),
+    signInAddressLimit: integer(env, 'SIGNIN_ADDRESS_LIMIT', 100, 1, 100_000),
+    signInAddressWindowSeconds: integer(env, 'SIGNIN_ADDRESS_WINDOW', 900, 60, 86_400),
+    trustProxy: parseTrustProxy(env.TRUST_PROXY),
+    tlsInFront: flag(env, 'TLS_IN_FRONT', false),
+    apiDocs: flag(env, 'API_DOCS', true),
     bodyLimit,
     pwaDist: env.PWA_DIST || null,
     logLevel,

@@ -27,8 +27,15 @@ export interface RefreshTokenRow {
   token_hash: string;
   expires_at: Date;
   replaced_at: Date | null;
-  revoked_at: Date | null;
   created_at: Date;
+}
+
+/** One sign-in: the family of refresh tokens and the access tokens issued from it. */
+export interface SessionRow {
+  id: string;
+  user_id: string;
+  created_at: Date;
+  revoked_at: Date | null;
 }
 
 export interface ProjectRow {
@@ -121,10 +128,12 @@ export interface ProjectMemberRow {
   created_at: Date;
 }
 
-export interface ThrottleHitRow {
+/** Failed sign-ins under one key (account, device or address); successes never count. */
+export interface SignInFailureRow {
   key: string;
-  hits: number;
-  expires_at: Date;
+  failures: number;
+  first_failed_at: Date;
+  last_failed_at: Date;
 }
 
 /**
@@ -171,9 +180,10 @@ declare module 'knex/types/tables.js' {
     organisations: OrganisationRow;
     users: UserRow;
     refresh_tokens: RefreshTokenRow;
+    sessions: SessionRow;
     projects: ProjectRow;
     project_members: ProjectMemberRow;
-    throttle_hits: ThrottleHitRow;
+    sign_in_failures: SignInFailureRow;
     quota_variables: QuotaVariableRow;
     quota_categories: QuotaCategoryRow;
     quota_cells: QuotaCellRow;

@@ -138,15 +138,28 @@ async function toApiError(response: Response): Promise<ApiError> {
   }
   const message = Array.isArray(body.message) ? body.message.join('; ') : body.message;
   return new ApiError(
-    message || body.error || fallbackMessage(response.status),
+    message || body.error || fallbackMessage(response),
     'http',
     response.status,
     Array.isArray(body.fields) ? body.fields : [],
   );
 }
 
-function fallbackMessage(status: number): string {
-  if (status === 429) return 'Too many attempts. Please wait a moment and try again.';
+/** A wait from a Retry-After header in seconds (RFC 9110 section 10.2.3), in words. */
+function waitFromRetryAfter(header: string | null): string | null {
+  if (!header || !/^\d+$/.test(header.trim())) return null;
+  const seconds = Number(header);
+  if (seconds < 60) return `${seconds} second${seconds === 1 ? '' : 's'}`;
+  const minutes = Math.ceil(seconds / 60);
+  return `${minutes} minute${minutes === 1 ? '' : 's'}`;
+}
+
+function fallbackMessage(response: Response): string {
+  const status = response.status;
+  if (status === 429) {
+    const wait = waitFromRetryAfter(response.headers.get('Retry-After'));
+    return wait ? `Too many attempts. Please try again in ${wait}.` : 'Too many attempts. Please wait a moment and try again.';
+  }
   if (status >= 500) return 'The server ran into a problem. Please try again shortly.';
   if (status === 404) return 'Not found.';
   if (status === 403) return 'You do not have access to this.';

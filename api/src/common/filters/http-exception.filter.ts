@@ -2,6 +2,10 @@ import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logge
 import type { Response } from 'express';
 import { STATUS_CODES } from 'node:http';
 import { isDatabaseUnavailable, RETRY_AFTER_SECONDS } from '../database-unavailable.js';
+import { TooManyRequestsException } from '../exceptions/too-many-requests.exception.js';
+
+/** Retry-After for a 429 that does not say how long to wait (RFC 9110 section 10.2.3, RFC 6585 section 4). */
+const DEFAULT_TOO_MANY_RETRY_AFTER_SECONDS = 60;
 
 /** The one error shape every route answers with. */
 export interface ErrorBody {
@@ -41,6 +45,10 @@ export class AllExceptionsFilter implements ExceptionFilter {
         fields = p.fields;
       }
       if (status === HttpStatus.SERVICE_UNAVAILABLE) res.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
+      if (status === HttpStatus.TOO_MANY_REQUESTS) {
+        const wait = exception instanceof TooManyRequestsException ? exception.retryAfterSeconds : DEFAULT_TOO_MANY_RETRY_AFTER_SECONDS;
+        res.setHeader('Retry-After', String(Math.max(1, Math.ceil(wait))));
+      }
       res.status(status).json(errorBody(status, message, fields));
       return;
     }

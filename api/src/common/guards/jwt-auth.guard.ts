@@ -19,6 +19,8 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
     // The user look-up failed for another reason than the token (the database is down):
     // let the error filter answer for it rather than call the token invalid.
     if (err && !(err instanceof HttpException)) throw err;
+    // The token was sound but its sign-in or account is over: say which.
+    if (err instanceof UnauthorizedException) throw err;
     if (err || !user) {
       const reason = info instanceof Error ? info.message : '';
       if (reason === 'jwt expired') throw new UnauthorizedException('Your sign-in has expired; refresh it or sign in again');

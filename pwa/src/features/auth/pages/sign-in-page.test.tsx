@@ -28,11 +28,13 @@ describe('sign-in page', () => {
     expect(await readSession()).toBeUndefined();
   });
 
-  it('says so when there have been too many attempts', async () => {
+  it('says so, and how long to wait, when there have been too many attempts', async () => {
     const api = installFakeApi();
-    api.on('POST', '/api/auth/login', () =>
-      problem(429, 'Too Many Requests', 'Too many sign-in attempts. Try again in a minute.'),
-    );
+    api.on('POST', '/api/auth/login', () => {
+      const reply = problem(429, 'Too Many Requests', 'Too many failed sign-ins; try again in 2 minutes');
+      reply.headers.set('Retry-After', '95');
+      return reply;
+    });
     renderApp('/sign-in');
     const user = userEvent.setup();
 
@@ -40,7 +42,20 @@ describe('sign-in page', () => {
     await user.type(screen.getByLabelText('Password'), 'guess');
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
-    expect(await screen.findByRole('alert')).toHaveTextContent('Too many sign-in attempts. Try again in a minute.');
+    expect(await screen.findByRole('alert')).toHaveTextContent('Too many failed sign-ins; try again in 2 minutes');
+  });
+
+  it('reads the wait from Retry-After when a proxy refuses with no message of its own', async () => {
+    const api = installFakeApi();
+    api.on('POST', '/api/auth/login', () => new Response('slow down', { status: 429, headers: { 'Retry-After': '600' } }));
+    renderApp('/sign-in');
+    const user = userEvent.setup();
+
+    await user.type(await screen.findByLabelText('E-mail'), 'lead@vellmoor.example');
+    await user.type(screen.getByLabelText('Password'), 'guess');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    expect(await screen.findByRole('alert')).toHaveTextContent('Too many attempts. Please try again in 10 minutes.');
   });
 
   it('explains that signing in needs the network once when the device is offline', async () => {

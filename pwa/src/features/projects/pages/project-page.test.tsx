@@ -174,11 +174,12 @@ describe('the project stage', () => {
   it('asks before starting fieldwork, shows why the server refuses, and moves on once confirmed', async () => {
     const api = projectApi();
     let ready = false;
-    api.on('PATCH', '/api/projects/p9', ({ body }) =>
-      ready
-        ? json({ ...project, ...(body as object) })
-        : json({ statusCode: 400, message: 'Fieldwork cannot start yet: add at least one interviewer to the team.' }, 400),
-    );
+    api.on('PATCH', '/api/projects/p9', ({ body }) => {
+      if (!ready) return json({ statusCode: 400, message: 'Fieldwork cannot start yet: add at least one interviewer to the team.' }, 400);
+      // The server now holds the new stage: later reads of the project see it too.
+      api.on('GET', '/api/projects/p9', () => json({ ...project, ...(body as object) }));
+      return json({ ...project, ...(body as object) });
+    });
     await signedInAs('lead');
     renderApp('/lead/projects/p9');
     const user = userEvent.setup();
