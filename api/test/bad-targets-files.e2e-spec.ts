@@ -38,6 +38,13 @@ describe('reading a targets file', () => {
     expect(res.body.fields[0].field).toBe('file');
   });
 
+  it('refuses a form of thousands of fields beside the file', async () => {
+    const fields = Object.fromEntries(Array.from({ length: 5000 }, (_, i) => [`f${i}`, 'x']));
+    const res = await lead.upload(`${projectPath}/targets/parse`, 'variable,category,share\nage,young,1\n', 'ok.csv', fields);
+    expect(res.status).toBe(400);
+    expect(res.body).toEqual({ statusCode: 400, error: 'Bad Request', message: 'Too many fields' });
+  });
+
   it('refuses in saving what it refuses in a file: the same rules', async () => {
     const long = await lead.put(`${projectPath}/targets`, { variables: [{ name: 'age', categories: [{ label: 'o'.repeat(101), share: 1 }] }] });
     expect(long.body.fields).toEqual([{ field: 'variables.0.categories.0.label', message: 'label must be at most 100 characters long' }]);
