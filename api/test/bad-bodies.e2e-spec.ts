@@ -68,6 +68,13 @@ describe('bodies too wide or too deep', () => {
 });
 
 describe('NUL characters and content types', () => {
+  it('says a lone JSON string is not a request, rather than not JSON', async () => {
+    const res = await postJson('/api/auth/login', '"plumbline"');
+    expect(res.status).toBe(400);
+    expect(res.body.message).toBe('The request body must be a JSON object or list');
+    expect((await postJson('/api/auth/login', '{"email":')).body.message).toBe('The request body is not valid JSON');
+  });
+
   it('refuses a NUL character in a text field, naming the field, and stores nothing', async () => {
     const res = await lead.post('/api/projects', {
       name: 'Tram\u0000 study',
