@@ -7,6 +7,7 @@ import { Logger } from 'nestjs-pino';
 import type { DestinationStream } from 'pino';
 import { AppModule } from './app.module.js';
 import { bodyErrorHandler } from './common/middleware/body-errors.js';
+import { bodyShape } from './common/middleware/body-shape.js';
 import { hsts } from './common/middleware/hsts.js';
 import { pwaFiles } from './common/middleware/pwa-files.js';
 import { readBulkhead } from './common/middleware/read-bulkhead.js';
@@ -49,6 +50,8 @@ export async function createApp(config: AppConfig, logStream?: DestinationStream
   app.use(readBulkhead(4));
   app.use(express.json({ limit: config.bodyLimit }));
   app.use(bodyErrorHandler);
+  // Deep or wide bodies are refused before validation walks them.
+  app.use(bodyShape);
   app.setGlobalPrefix('api');
   app.useGlobalPipes(createValidationPipe());
   app.enableShutdownHooks();

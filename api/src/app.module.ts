@@ -10,6 +10,7 @@ import { BalanceModule } from './balance/balance.module.js';
 import { AllExceptionsFilter } from './common/filters/http-exception.filter.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
+import { ContentTypeInterceptor } from './common/interceptors/content-type.interceptor.js';
 import { EtagInterceptor } from './common/interceptors/etag.interceptor.js';
 import type { AppConfig } from './config/config.js';
 import { ConfigModule } from './config/config.module.js';
@@ -54,6 +55,7 @@ export class AppModule {
         { provide: APP_GUARD, useClass: JwtAuthGuard },
         { provide: APP_GUARD, useClass: RolesGuard },
         { provide: APP_FILTER, useClass: AllExceptionsFilter },
+        { provide: APP_INTERCEPTOR, useClass: ContentTypeInterceptor },
         { provide: APP_INTERCEPTOR, useClass: EtagInterceptor },
       ],
     };

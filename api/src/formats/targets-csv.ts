@@ -3,7 +3,7 @@
 // variables. Shared by the API (uploaded files) and the `plumbline` command line (files on disk).
 import { parse } from 'csv-parse/sync';
 import { JOINT_SEPARATOR } from '../estimation/joint-names.js';
-import { parseNumber } from './numbers.js';
+import { MAX_SHARE, parseNumber } from './numbers.js';
 
 export interface TargetShare {
   category: string;
@@ -57,6 +57,8 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
   const [head, ...records] = rows;
   if (!head) throw new TargetsFormatError(`${source}: file is empty`);
   const header = head.record.map((h) => h.trim().toLowerCase());
+  const twice = header.find((h, i) => header.indexOf(h) !== i);
+  if (twice !== undefined) throw new TargetsFormatError(`${source}: line ${head.info.lines}: column "${twice}" is given twice`);
   for (const column of COLUMNS) {
     if (!header.includes(column)) {
       throw new TargetsFormatError(`${source}: line ${head.info.lines}: missing column "${column}" (expected variable${delimiter}category${delimiter}share)`);
@@ -82,6 +84,9 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
       throw new TargetsFormatError(
         `${source}: line ${line}: variable ${variable} category "${category}": share "${text.trim()}" is not a non-negative number`,
       );
+    }
+    if (share > MAX_SHARE) {
+      throw new TargetsFormatError(`${source}: line ${line}: variable ${variable} category "${category}": share ${text.trim()} is larger than ${MAX_SHARE}`);
     }
     const key = JSON.stringify([variable, category]);
     if (lines.has(key)) {

@@ -27,6 +27,10 @@ export class ExportService {
       header: true,
       columns: ['interview_id', 'field_day', ...variables.map((v) => v.name), 'headline', 'over_quota', 'review_status', 'flags'],
       cast: { boolean: (value) => (value ? '1' : '0') },
+      // Labels and variable names are typed by people; a spreadsheet would run one starting
+      // with = + - @ tab or carriage return as a formula. OWASP's CSV-injection advice
+      // (owasp.org/www-community/attacks/CSV_Injection): prefix such cells with a single quote.
+      escape_formulas: true,
     });
     const toRecord = async function* (source: AsyncIterable<{ id: string; field_day: string; category_ids: string[]; headline_answer: boolean; over_quota: boolean; review_status: string; flags: string[] }>) {
       for await (const r of source) {

@@ -3,11 +3,12 @@ import { CellAllocatorModule } from '../quotas/cell-allocator.js';
 import { ProjectAccess } from './project-access.service.js';
 import { ProjectsController } from './projects.controller.js';
 import { ProjectsService } from './projects.service.js';
+import { TimeZones } from './time-zones.js';
 
 @Module({
   imports: [CellAllocatorModule],
   controllers: [ProjectsController],
-  providers: [ProjectsService, ProjectAccess],
+  providers: [ProjectsService, ProjectAccess, TimeZones],
   exports: [ProjectsService, ProjectAccess],
 })
 export class ProjectsModule {}

@@ -7,6 +7,7 @@ import type { CreateProjectDto } from './dto/create-project.dto.js';
 import type { UpdateProjectDto } from './dto/update-project.dto.js';
 import { CellAllocator } from '../quotas/cell-allocator.js';
 import { ProjectAccess } from './project-access.service.js';
+import { TimeZones } from './time-zones.js';
 
 export interface ProjectSummary {
   id: string;
@@ -56,6 +57,7 @@ export class ProjectsService {
     @Inject(KNEX) private readonly db: Knex,
     private readonly access: ProjectAccess,
     private readonly cells: CellAllocator,
+    private readonly zones: TimeZones,
   ) {}
 
   async list(user: AuthUser): Promise<ProjectSummary[]> {
@@ -69,6 +71,7 @@ export class ProjectsService {
 
   async create(user: AuthUser, dto: CreateProjectDto): Promise<ProjectSummary> {
     checkDates(dto.fieldStart, dto.fieldEnd);
+    await this.zones.check(dto.timeZone);
     const [row] = await this.db('projects')
       .insert({
         organisation_id: user.organisationId,
@@ -89,6 +92,7 @@ export class ProjectsService {
   async update(user: AuthUser, id: string, dto: UpdateProjectDto): Promise<ProjectSummary> {
     const current = await this.access.find(user, id);
     checkDates(dto.fieldStart ?? current.field_start, dto.fieldEnd ?? current.field_end);
+    await this.zones.check(dto.timeZone);
     const changes: Partial<ProjectRow> = {};
     if (dto.name !== undefined) changes.name = dto.name.trim();
     if (dto.topic !== undefined) changes.topic = dto.topic.trim();

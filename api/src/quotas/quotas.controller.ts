@@ -44,7 +44,8 @@ export class QuotasController {
   @Roles('lead', 'admin')
   @ApiConsumes('multipart/form-data')
   @ApiOkResponse({ type: ParsedTargetsResponse })
-  @UseInterceptors(FileInterceptor('file', { limits: { fileSize: TARGETS_FILE_LIMIT, files: 1 } }))
+  // One file and the interlock field: a form of thousands of fields is refused as it arrives.
+  @UseInterceptors(FileInterceptor('file', { limits: { fileSize: TARGETS_FILE_LIMIT, files: 1, fields: 4, fieldSize: 4096, parts: 5 } }))
   async parseTargets(
     @CurrentUser() user: AuthUser,
     @Param('projectId', ParseUUIDPipe) projectId: string,

@@ -10,7 +10,9 @@ import { JOINT_SEPARATOR } from '../estimation/joint-names.js';
 import { resolveTargets } from '../estimation/joint-targets.js';
 import type { MarginTarget } from '../estimation/raking.js';
 import { CellAllocator, loadActiveTargets, loadJointTable, loadVariableViews, type VariableView } from './cell-allocator.js';
-import type { SaveTargetsDto } from './dto/targets.dto.js';
+import { SaveTargetsDto } from './dto/targets.dto.js';
+import { validateAs } from '../common/validation.js';
+import { atLine } from './targets-file-lines.js';
 
 export interface TargetsView {
   variables: VariableView[];
@@ -215,6 +217,8 @@ export class TargetsService {
         })),
         ...(table ? { jointShares: table.shares.map((s) => ({ categories: s.category.split(JOINT_SEPARATOR), share: s.share })) } : {}),
       };
+      // The very rules saving applies (the request DTO), each problem told by the file's line.
+      validateAs(SaveTargetsDto, dto, (p) => atLine(p, source, dto, table, parsed.lineOf));
       checkTargets(dto);
       return dto;
     } catch (error) {

@@ -434,9 +434,15 @@ export interface components {
         /** @enum {string} */
         CellStatus: "open" | "nearly_full" | "full" | "closed";
         CreateProjectDto: {
-            /** @example 2026-12-06 */
+            /**
+             * Format: date
+             * @example 2026-12-06
+             */
             fieldEnd: string;
-            /** @example 2026-11-16 */
+            /**
+             * Format: date
+             * @example 2026-11-16
+             */
             fieldStart: string;
             /** @example Do you support extending the tram line to the eastern villages? */
             headlineQuestion: string;
@@ -445,7 +451,7 @@ export interface components {
             /** @example 1200 */
             targetSize: number;
             /**
-             * @description IANA time zone of the fieldwork; field days are counted in it. Default UTC.
+             * @description IANA time zone of the fieldwork, as the database knows it; field days are counted in it. Default UTC.
              * @example Europe/London
              */
             timeZone?: string;
@@ -707,9 +713,15 @@ export interface components {
             name: string;
         };
         UpdateProjectDto: {
-            /** @example 2026-12-06 */
+            /**
+             * Format: date
+             * @example 2026-12-06
+             */
             fieldEnd?: string;
-            /** @example 2026-11-16 */
+            /**
+             * Format: date
+             * @example 2026-11-16
+             */
             fieldStart?: string;
             /** @example Do you support extending the tram line to the eastern villages? */
             headlineQuestion?: string;
@@ -719,7 +731,7 @@ export interface components {
             /** @example 1200 */
             targetSize?: number;
             /**
-             * @description IANA time zone of the fieldwork; field days are counted in it. Default UTC.
+             * @description IANA time zone of the fieldwork, as the database knows it; field days are counted in it. Default UTC.
              * @example Europe/London
              */
             timeZone?: string;

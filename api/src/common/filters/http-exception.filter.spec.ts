@@ -9,6 +9,7 @@ function answer(exception: unknown) {
   const res = {
     setHeader: (name: string, value: string) => (headers[name] = value),
     status: (code: number) => ((reply.status = code), res),
+    type: (value: string) => ((headers['Content-Type'] = value), res),
     json: (body: unknown) => (reply.body = body),
   };
   const host = { switchToHttp: () => ({ getResponse: () => res }) } as unknown as ArgumentsHost;

@@ -30,7 +30,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
       this.logger.warn(`database unavailable: ${(exception as Error).message}`);
       const status = HttpStatus.SERVICE_UNAVAILABLE;
       res.setHeader('Retry-After', String(RETRY_AFTER_SECONDS));
-      res.status(status).json(errorBody(status, 'The database cannot be reached just now; try again in a few seconds.'));
+      res.status(status).type('json').json(errorBody(status, 'The database cannot be reached just now; try again in a few seconds.'));
       return;
     }
     if (exception instanceof HttpException) {
@@ -49,11 +49,12 @@ export class AllExceptionsFilter implements ExceptionFilter {
         const wait = exception instanceof TooManyRequestsException ? exception.retryAfterSeconds : DEFAULT_TOO_MANY_RETRY_AFTER_SECONDS;
         res.setHeader('Retry-After', String(Math.max(1, Math.ceil(wait))));
       }
-      res.status(status).json(errorBody(status, message, fields));
+      // Errors are JSON even from a route that declared another type for its answer (the CSV export).
+      res.status(status).type('json').json(errorBody(status, message, fields));
       return;
     }
     this.logger.error(exception instanceof Error ? exception.stack : String(exception));
     const status = HttpStatus.INTERNAL_SERVER_ERROR;
-    res.status(status).json(errorBody(status, 'Something went wrong on the server; nothing was changed'));
+    res.status(status).type('json').json(errorBody(status, 'Something went wrong on the server; nothing was changed'));
   }
 }

@@ -1,72 +1,60 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import {
-  ArrayMaxSize,
-  ArrayMinSize,
-  IsArray,
-  IsBoolean,
-  IsNumber,
-  IsOptional,
-  IsString,
-  MaxLength,
-  Min,
-  MinLength,
-  ValidateNested,
-} from 'class-validator';
+import { IsBoolean, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { applyDecorators } from '@nestjs/common';
+import { ListOf, Name, NoNul, NumberFrom, Omittable } from '../../common/validation-rules.js';
+import { MAX_SHARE } from '../../formats/numbers.js';
 
 export class TargetCategoryDto {
   @ApiProperty({ example: '18-34' })
-  @IsString()
-  @MinLength(1, { message: 'label must not be empty' })
-  @MaxLength(100)
+  @Name('label', 100)
   label: string;
 
   @ApiProperty({ example: 0.27, description: 'Population share; any non-negative numbers, normalised per variable' })
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'share must be a number' })
-  @Min(0, { message: 'share must not be negative' })
+  @NumberFrom('share', 0, MAX_SHARE)
   share: number;
 }
 
 export class TargetVariableDto {
   @ApiProperty({ example: 'age band' })
-  @IsString()
-  @MinLength(1, { message: 'name must not be empty' })
-  @MaxLength(100)
+  @Name('name', 100)
   name: string;
 
   @ApiPropertyOptional({ description: 'Interlocked variables form crossed cells; the rest are margin quotas' })
-  @IsOptional()
-  @IsBoolean()
+  @Omittable()
+  @IsBoolean({ message: 'interlocked must be true or false' })
   interlocked?: boolean;
 
   @ApiProperty({ type: [TargetCategoryDto] })
-  @IsArray()
-  @ArrayMinSize(1, { message: 'categories must list at least one category' })
-  @ArrayMaxSize(100)
+  @ListOf('categories', 1, 100, 'categories')
   @ValidateNested({ each: true })
   @Type(() => TargetCategoryDto)
   categories: TargetCategoryDto[];
 }
 
+/** Each label of a joint row: text, at most 100 characters (as a category's label), no NUL character. */
+function JointLabels(): PropertyDecorator {
+  return applyDecorators(
+    IsString({ each: true, message: 'each of categories must be a category label' }),
+    MaxLength(100, { each: true, message: 'each of categories must be at most 100 characters long' }),
+    NoNul('each of categories must not contain the NUL character', { each: true }),
+  );
+}
+
 export class JointShareDto {
   @ApiProperty({ example: ['18-24', 'female'], description: 'One category label per interlocked variable, in the order the variables are listed' })
-  @IsArray()
-  @ArrayMinSize(2, { message: 'categories must name one category of each interlocked variable' })
-  @ArrayMaxSize(20)
-  @IsString({ each: true })
+  @JointLabels()
+  @ListOf('categories', 2, 20, 'category labels, one of each interlocked variable')
   categories: string[];
 
   @ApiProperty({ example: 0.054, description: 'Joint population share; any non-negative numbers, normalised over the table' })
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'share must be a number' })
-  @Min(0, { message: 'share must not be negative' })
+  @NumberFrom('share', 0, MAX_SHARE)
   share: number;
 }
 
 export class SaveTargetsDto {
   @ApiProperty({ type: [TargetVariableDto] })
-  @IsArray()
-  @ArrayMinSize(1, { message: 'variables must list at least one quota variable' })
-  @ArrayMaxSize(20)
+  @ListOf('variables', 1, 20, 'quota variables')
   @ValidateNested({ each: true })
   @Type(() => TargetVariableDto)
   variables: TargetVariableDto[];
@@ -75,9 +63,8 @@ export class SaveTargetsDto {
     type: [JointShareDto],
     description: 'Joint shares of the interlocked variables (every combination); without them cell targets are the product of the margins',
   })
-  @IsOptional()
-  @IsArray()
-  @ArrayMaxSize(2000)
+  @Omittable()
+  @ListOf('jointShares', 0, 2000, 'combinations')
   @ValidateNested({ each: true })
   @Type(() => JointShareDto)
   jointShares?: JointShareDto[];

@@ -1,6 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
 import { ROLES, type Role } from '../../common/roles.js';
+import { Name } from '../../common/validation-rules.js';
 
 export class CreateUserDto {
   @ApiProperty({ example: 'new.interviewer@vellmoor.example' })
@@ -9,9 +10,7 @@ export class CreateUserDto {
   email: string;
 
   @ApiProperty({ example: 'Ada Brennan' })
-  @IsString()
-  @MinLength(1, { message: 'name must not be empty' })
-  @MaxLength(200)
+  @Name('name', 200)
   name: string;
 
   @ApiProperty({ enum: ROLES })
