@@ -10,6 +10,7 @@ import * as m0005 from './20261202000500_project_time_zone.js';
 import * as m0006 from './20261202000600_interview_flags.js';
 import * as m0007 from './20261202000700_interview_count_tables.js';
 import * as m0008 from './20261202000800_joint_shares.js';
+import * as m0020 from './20261202002000_accounts.js';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000100_organisations_and_users': m0001,
@@ -20,6 +21,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202000600_interview_flags': m0006,
   '20261202000700_interview_count_tables': m0007,
   '20261202000800_joint_shares': m0008,
+  '20261202002000_accounts': m0020,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

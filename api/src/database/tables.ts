@@ -14,7 +14,8 @@ export interface UserRow {
   email: string;
   name: string;
   role: Role;
-  password_hash: string;
+  /** Null for an invited person who has not yet set a password through their link. */
+  password_hash: string | null;
   active: boolean;
   created_at: Date;
   updated_at: Date;
@@ -28,6 +29,19 @@ export interface RefreshTokenRow {
   expires_at: Date;
   replaced_at: Date | null;
   revoked_at: Date | null;
+  created_at: Date;
+}
+
+export type OneTimeTokenPurpose = 'invitation' | 'password_reset';
+
+/** A one-time link's token: only the SHA-256 of its secret is stored; spent once, expiring. */
+export interface OneTimeTokenRow {
+  id: string;
+  user_id: string;
+  purpose: OneTimeTokenPurpose;
+  token_hash: string;
+  expires_at: Date;
+  used_at: Date | null;
   created_at: Date;
 }
 
@@ -169,6 +183,7 @@ declare module 'knex/types/tables.js' {
     organisations: OrganisationRow;
     users: UserRow;
     refresh_tokens: RefreshTokenRow;
+    one_time_tokens: OneTimeTokenRow;
     projects: ProjectRow;
     project_members: ProjectMemberRow;
     throttle_hits: ThrottleHitRow;

@@ -1,0 +1,32 @@
+// Works on the mail queue: hands each message to the SMTP server named by SMTP_URL
+// through nodemailer. A refused or failed delivery throws, so the job is tried again.
+import { Inject, Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
+import nodemailer, { type Transporter } from 'nodemailer';
+import { APP_CONFIG } from '../config/config.constants.js';
+import type { AppConfig } from '../config/config.js';
+import type { JobQueue } from '../jobs/job-queue.js';
+import { JOB_QUEUE } from '../jobs/jobs.constants.js';
+import { MAIL_QUEUE, type MailMessage } from './mail-message.js';
+
+@Injectable()
+export class MailSender implements OnApplicationBootstrap {
+  private readonly logger = new Logger(MailSender.name);
+  private readonly transport: Transporter;
+
+  constructor(
+    @Inject(APP_CONFIG) private readonly config: AppConfig,
+    @Inject(JOB_QUEUE) private readonly jobs: JobQueue,
+  ) {
+    this.transport = nodemailer.createTransport(config.accounts.smtpUrl);
+  }
+
+  async onApplicationBootstrap(): Promise<void> {
+    if (!this.config.accounts.runJobs) return;
+    await this.jobs.work<MailMessage>(MAIL_QUEUE, (message) => this.send(message));
+  }
+
+  async send(message: MailMessage): Promise<void> {
+    const info = await this.transport.sendMail({ from: this.config.accounts.mailFrom, ...message });
+    this.logger.log(`mail "${message.subject}" accepted by the SMTP server (${String(info.messageId)})`);
+  }
+}
