@@ -8,6 +8,9 @@ export interface OrganisationUser {
   email: string;
   name: string;
   role: Role;
+  active: boolean;
+  /** invited: has not set a password yet; disabled: may not sign in. */
+  status: 'invited' | 'active' | 'disabled';
   createdAt: string;
 }
 
