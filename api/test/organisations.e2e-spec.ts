@@ -93,7 +93,7 @@ describe('plumbline org create', () => {
     expect(out).toMatchObject({ organisation: { name: 'Mardon Polling' }, admin: { email, name: 'Otto Pell' } });
     const session = await acceptInvitation(email, 'mardon polling opens its doors');
     expect(session.user.role).toBe('admin');
-    expect(session.user.organisation.id).toBe(out.organisation.id);
+    expect((await h.db('users').where({ id: session.user.id }).first())!.organisation_id).toBe(out.organisation.id);
   });
 
   it.each([

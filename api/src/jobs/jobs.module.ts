@@ -4,16 +4,17 @@ import type { AppConfig } from '../config/config.js';
 import { JobQueue } from './job-queue.js';
 import { JOB_QUEUE } from './jobs.constants.js';
 
-/** The process's job queue, started before any module uses it and stopped on shutdown. */
+/** The process's job queue, connecting from start-up and stopped on shutdown. */
 @Global()
 @Module({
   providers: [
     {
       provide: JOB_QUEUE,
       inject: [APP_CONFIG],
-      useFactory: async (config: AppConfig) => {
+      useFactory: (config: AppConfig) => {
         const queue = new JobQueue(config.databaseUrl);
-        await queue.start();
+        // Connects in the background: the API starts even while the database is down.
+        queue.start().catch(() => undefined);
         return queue;
       },
     },

@@ -20,9 +20,12 @@ export class MailSender implements OnApplicationBootstrap {
     this.transport = nodemailer.createTransport(config.accounts.smtpUrl);
   }
 
-  async onApplicationBootstrap(): Promise<void> {
+  onApplicationBootstrap(): void {
     if (!this.config.accounts.runJobs) return;
-    await this.jobs.work<MailMessage>(MAIL_QUEUE, (message) => this.send(message));
+    // Not awaited: the worker starts once the queue has connected, which may be after an outage.
+    this.jobs
+      .work<MailMessage>(MAIL_QUEUE, (message) => this.send(message))
+      .catch((error: unknown) => this.logger.error(`the mail worker did not start: ${String(error)}`));
   }
 
   async send(message: MailMessage): Promise<void> {
