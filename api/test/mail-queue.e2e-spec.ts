@@ -30,3 +30,27 @@ describe('the mail queue', () => {
     }
   });
 });
+
+describe('the mail queue during an outage', () => {
+  it('lets the API start while PostgreSQL is down and sends mail once it is back', async () => {
+    const { startDatabase, stopDatabase } = await import('./cluster.js');
+    stopDatabase();
+    let h: Awaited<ReturnType<typeof startApp>> | undefined;
+    try {
+      h = await startApp();
+      expect((await h.http().get('/api/health')).status).toBe(503);
+    } finally {
+      startDatabase();
+    }
+    try {
+      const org = await createOrg(h.db, 'Outagemail');
+      const admin = (await signIn(h, org.users.admin.email)).accessToken;
+      const email = `after.outage.${Math.random().toString(36).slice(2, 8)}@queuetest.example`;
+      const res = await h.http().post('/api/users/invitations').set('Authorization', `Bearer ${admin}`).send({ email, name: 'After Outage', role: 'lead' });
+      expect(res.status).toBe(201);
+      expect((await waitForMails(mailApi, email, 1, 40_000))[0]!.subject).toMatch(/^You are invited to Outagemail/);
+    } finally {
+      await h.close();
+    }
+  }, 90_000);
+});
