@@ -29,7 +29,13 @@ export class MailSender implements OnApplicationBootstrap {
   }
 
   async send(message: MailMessage): Promise<void> {
-    const info = await this.transport.sendMail({ from: this.config.accounts.mailFrom, ...message });
-    this.logger.log(`mail "${message.subject}" accepted by the SMTP server (${String(info.messageId)})`);
+    try {
+      const info = await this.transport.sendMail({ from: this.config.accounts.mailFrom, ...message });
+      this.logger.log(`mail "${message.subject}" accepted by the SMTP server (${String(info.messageId)})`);
+    } catch (error) {
+      // Thrown on so the queue tries again later; the recipient's address stays out of the log.
+      this.logger.warn(`mail "${message.subject}" not accepted by the SMTP server, will retry: ${String(error)}`);
+      throw error;
+    }
   }
 }
