@@ -23,6 +23,9 @@ import { migrateLatest } from '../scripts/migrate.js';
 import { contactRows } from './generate-data.js';
 import { load } from './load.js';
 
+/** The benchmark sends no mail; the setting is required, nothing listens there. */
+const NO_MAIL = 'smtp://127.0.0.1:1025';
+
 const root = resolve(import.meta.dirname, '..');
 const PORT = Number(process.env.BENCH_API_PORT ?? 3931);
 const BASE = `http://127.0.0.1:${PORT}`;
@@ -74,7 +77,7 @@ async function main(): Promise<void> {
   await db('project_members').insert([interviewer!, ...team].map((u) => ({ project_id: project!.id, user_id: u.id })));
 
   const server = spawn(process.execPath, [join(root, 'api/dist/main.js')], {
-    env: { ...process.env, DATABASE_URL: url, PORT: String(PORT), HOST: '127.0.0.1', JWT_SECRET: 'bench-secret-0123456789abcdefghijklmnop', LOG_LEVEL: 'warn' },
+    env: { ...process.env, DATABASE_URL: url, PORT: String(PORT), HOST: '127.0.0.1', JWT_SECRET: 'bench-secret-0123456789abcdefghijklmnop', LOG_LEVEL: 'warn', SMTP_URL: NO_MAIL },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   try {

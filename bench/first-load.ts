@@ -19,6 +19,9 @@ import { join, resolve } from 'node:path';
 import { openBrowser, PHONE } from '../test/browser/browser.js';
 import { migrateLatest } from '../scripts/migrate.js';
 
+/** The benchmark sends no mail; the setting is required, nothing listens there. */
+const NO_MAIL = 'smtp://127.0.0.1:1025';
+
 const root = resolve(import.meta.dirname, '..');
 const PORT = 3933;
 const BASE = `http://127.0.0.1:${PORT}`;
@@ -64,7 +67,7 @@ async function main(): Promise<void> {
   await migrateLatest(url);
   execFileSync(process.execPath, [join(root, 'api/dist/demo/seed.js')], { env: { ...process.env, DATABASE_URL: url }, stdio: 'inherit' });
   const server = spawn(process.execPath, [join(root, 'api/dist/main.js')], {
-    env: { ...process.env, DATABASE_URL: url, PORT: String(PORT), HOST: '127.0.0.1', PWA_DIST: join(root, 'pwa/dist'), JWT_SECRET: 'bench-secret-0123456789abcdefghijklmnop', LOG_LEVEL: 'warn' },
+    env: { ...process.env, DATABASE_URL: url, PORT: String(PORT), HOST: '127.0.0.1', PWA_DIST: join(root, 'pwa/dist'), JWT_SECRET: 'bench-secret-0123456789abcdefghijklmnop', LOG_LEVEL: 'warn', SMTP_URL: NO_MAIL },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   try {

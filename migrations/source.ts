@@ -13,6 +13,7 @@ import * as m0008 from './20261202000800_joint_shares.js';
 import * as m0009 from './20261202000900_over_quota_cells.js';
 import * as m0010 from './20261202001000_sessions.js';
 import * as m0011 from './20261202001010_sign_in_failures.js';
+import * as m0020 from './20261202002000_accounts.js';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000100_organisations_and_users': m0001,
@@ -26,6 +27,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202000900_over_quota_cells': m0009,
   '20261202001000_sessions': m0010,
   '20261202001010_sign_in_failures': m0011,
+  '20261202002000_accounts': m0020,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

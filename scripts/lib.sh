@@ -157,3 +157,38 @@ build_all() {
   build_api
   build_if_stale pwa "$ROOT/pwa/dist/.stamp" "$ROOT/pwa/src" "$ROOT/pwa/index.html" "$ROOT/pwa/vite.config.ts" "$ROOT/pwa/public" "$ROOT/fonts" "$ROOT/packages" "$ROOT/package-lock.json"
 }
+
+# The local mail fake of `npm start`: maildev on loopback, SMTP on MAILDEV_SMTP_PORT (1025)
+# and its web page and API on MAILDEV_WEB_PORT (1080). Mail is kept in memory only.
+MAIL_FAKE_SMTP_PORT="${MAILDEV_SMTP_PORT:-1025}"
+MAIL_FAKE_WEB_PORT="${MAILDEV_WEB_PORT:-1080}"
+MAIL_FAKE_PID_FILE="$DATA_DIR/maildev.pid"
+MAIL_FAKE_STARTED_HERE=0
+
+mail_fake_running() {
+  [[ -s "$MAIL_FAKE_PID_FILE" ]] && kill -0 "$(cat "$MAIL_FAKE_PID_FILE")" 2>/dev/null
+}
+
+ensure_mail_fake_running() {
+  mkdir -p "$DATA_DIR"
+  mail_fake_running && return 0
+  for port in "$MAIL_FAKE_SMTP_PORT" "$MAIL_FAKE_WEB_PORT"; do
+    port_in_use "$port" && die "port $port on $PG_HOST is taken; set MAILDEV_SMTP_PORT and MAILDEV_WEB_PORT to free ports"
+  done
+  "$ROOT/node_modules/.bin/maildev" --ip 127.0.0.1 --web-ip 127.0.0.1 \
+    --smtp "$MAIL_FAKE_SMTP_PORT" --web "$MAIL_FAKE_WEB_PORT" --silent >"$DATA_DIR/maildev.log" 2>&1 &
+  echo $! >"$MAIL_FAKE_PID_FILE"
+  for _ in $(seq 1 50); do
+    port_in_use "$MAIL_FAKE_WEB_PORT" && port_in_use "$MAIL_FAKE_SMTP_PORT" && { MAIL_FAKE_STARTED_HERE=1; return 0; }
+    mail_fake_running || die "maildev did not start (see $DATA_DIR/maildev.log)"
+    sleep 0.2
+  done
+  die "maildev did not start listening (see $DATA_DIR/maildev.log)"
+}
+
+stop_mail_fake() {
+  if mail_fake_running; then
+    kill "$(cat "$MAIL_FAKE_PID_FILE")" && say "maildev stopped"
+  fi
+  rm -f "$MAIL_FAKE_PID_FILE"
+}

@@ -13,6 +13,14 @@ export JWT_SECRET; JWT_SECRET="${JWT_SECRET:-$(jwt_secret)}"
 export HOST="${HOST:-127.0.0.1}" PORT="${PORT:-3000}"
 export PWA_DIST="$ROOT/pwa/dist"
 export LOG_LEVEL="${LOG_LEVEL:-warn}"   # LOG_LEVEL=info logs every request
+# Mail goes to the local fake unless SMTP_URL names a real server.
+if [[ -z "${SMTP_URL:-}" ]]; then
+  ensure_mail_fake_running
+  export SMTP_URL="smtp://127.0.0.1:$MAIL_FAKE_SMTP_PORT"
+  MAILBOX_LINE="  Mail it sends (invitations, password resets): http://127.0.0.1:$MAIL_FAKE_WEB_PORT   (maildev, a local fake)"
+else
+  MAILBOX_LINE="  Mail goes to $SMTP_URL"
+fi
 
 API_PID=
 cleanup() {
@@ -20,6 +28,7 @@ cleanup() {
   set +e
   if [[ -n "$API_PID" ]]; then kill "$API_PID" 2>/dev/null; wait "$API_PID" 2>/dev/null; fi
   if [[ "$PG_STARTED_HERE" == 1 ]]; then stop_postgres; fi
+  if [[ "$MAIL_FAKE_STARTED_HERE" == 1 ]]; then stop_mail_fake; fi
 }
 trap cleanup INT TERM EXIT
 
@@ -38,6 +47,7 @@ done
 cat <<MSG
 
   Plumbline is running at http://$HOST:$PORT   (API docs: http://$HOST:$PORT/api/docs)
+$MAILBOX_LINE
 
   Demo sign-ins (password for all: plumbline-demo)
     admin@vellmoor.example        admin: people and roles
@@ -46,6 +56,6 @@ cat <<MSG
     interviewer@vellmoor.example  interviewer: log contacts, outbox
     client@vellmoor.example       client: read-only progress
 
-  Ctrl-C stops the API$( [[ $PG_STARTED_HERE == 1 ]] && echo " and PostgreSQL" ).
+  Ctrl-C stops the API$( [[ $PG_STARTED_HERE == 1 ]] && echo ", PostgreSQL" )$( [[ $MAIL_FAKE_STARTED_HERE == 1 ]] && echo " and the mail fake" ).
 MSG
 wait "$API_PID"

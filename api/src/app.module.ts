@@ -5,6 +5,7 @@ import { LoggerModule } from 'nestjs-pino';
 import type { DestinationStream } from 'pino';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
+import { AccountsModule } from './accounts/accounts.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BalanceModule } from './balance/balance.module.js';
 import { AllExceptionsFilter } from './common/filters/http-exception.filter.js';
@@ -17,6 +18,8 @@ import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { InterviewsModule } from './interviews/interviews.module.js';
+import { JobsModule } from './jobs/jobs.module.js';
+import { OrganisationsModule } from './organisations/organisations.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
 import { QuotasModule } from './quotas/quotas.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -49,6 +52,9 @@ export class AppModule {
         QuotasModule,
         InterviewsModule,
         BalanceModule,
+        JobsModule,
+        AccountsModule,
+        OrganisationsModule,
         ...pwaModules(config),
       ],
       providers: [

@@ -5,6 +5,7 @@ import knex, { type Knex } from 'knex';
 import { randomUUID } from 'node:crypto';
 import { Writable } from 'node:stream';
 import request from 'supertest';
+import { inject } from 'vitest';
 import { createApp } from '../src/app.factory.js';
 import { hashPassword } from '../src/auth/password.js';
 import type { Role } from '../src/common/roles.js';
@@ -27,6 +28,7 @@ export async function startApp(env: Record<string, string> = {}): Promise<Harnes
     DATABASE_URL: process.env.DATABASE_URL,
     JWT_SECRET: TEST_SECRET,
     LOG_LEVEL: 'info',
+    SMTP_URL: inject('mailFake').smtpUrl,
     ...env,
   });
   const logs: string[] = [];

@@ -37,6 +37,8 @@ export class ApiProcess {
         HOST: '127.0.0.1',
         JWT_SECRET: 'fault-suite-secret-0123456789abcdefghijkl',
         LOG_LEVEL: 'error',
+        // The benchmark sends no mail; the setting is required, nothing listens there.
+        SMTP_URL: 'smtp://127.0.0.1:1025',
       },
       stdio: ['ignore', 'ignore', 'inherit'],
     });

@@ -1,17 +1,21 @@
 // Starts the built API (serving the built PWA) on the test database with the demo
-// data seeded, for the browser suite. The bootstrap builds both halves first.
+// data seeded, and the local mail fake it sends to, for the browser suite. The bootstrap
+// builds both halves first.
 import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { migrateLatest } from '../../scripts/migrate.js';
+import { startMailFake } from '../mail-fake.js';
 
 const root = resolve(import.meta.dirname, '../..');
 let server: ChildProcess | undefined;
+let stopMail: (() => Promise<void>) | undefined;
 
 declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
+    mailApiUrl: string;
   }
 }
 
@@ -24,6 +28,8 @@ export async function setup(project: TestProject): Promise<void> {
   await migrateLatest(databaseUrl);
   execFileSync(process.execPath, [join(root, 'api/dist/demo/seed.js')], { env: process.env, stdio: 'inherit' });
 
+  const mail = await startMailFake();
+  stopMail = mail.stop;
   const port = Number(process.env.BROWSER_TEST_PORT ?? 3917);
   const baseUrl = `http://127.0.0.1:${port}`;
   server = spawn(process.execPath, [join(root, 'api/dist/main.js')], {
@@ -34,6 +40,7 @@ export async function setup(project: TestProject): Promise<void> {
       PWA_DIST: join(root, 'pwa/dist'),
       JWT_SECRET: 'browser-suite-secret-0123456789abcdef',
       LOG_LEVEL: 'warn',
+      SMTP_URL: mail.smtpUrl,
     },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
@@ -47,8 +54,10 @@ export async function setup(project: TestProject): Promise<void> {
     await new Promise((r) => setTimeout(r, 200));
   }
   project.provide('baseUrl', baseUrl);
+  project.provide('mailApiUrl', mail.apiUrl);
 }
 
 export async function teardown(): Promise<void> {
   server?.kill('SIGTERM');
+  await stopMail?.();
 }

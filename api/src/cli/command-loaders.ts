@@ -23,6 +23,10 @@ const LOADERS: Readonly<Record<string, () => Promise<Command>>> = {
     const m = await import('./quotas-command.js');
     return { usage: m.QUOTAS_USAGE, run: m.quotasCommand };
   },
+  org: async () => {
+    const m = await import('./org-command.js');
+    return { usage: m.ORG_USAGE, run: m.orgCommand };
+  },
 };
 
 export const COMMAND_NAMES = Object.keys(LOADERS);

@@ -8,15 +8,17 @@ export interface Output {
 /** One `plumbline` command: its usage line and what it does with its arguments. */
 export interface Command {
   usage: string;
-  run(args: string[]): object;
+  /** A command that works on the database answers asynchronously. */
+  run(args: string[]): object | Promise<object>;
 }
 
 /**
  * Runs one `plumbline` command from the commands given (all of them, or only the one asked
  * for). Returns the exit code: 0 with one JSON object on stdout, 2 with a one-line reason on
- * stderr for bad input (no output file written), 1 for a fault.
+ * stderr for bad input (no output file written), 1 for a fault. Synchronous for the file
+ * commands, a promise for a command that answers asynchronously.
  */
-export function dispatch(argv: string[], io: Output, commands: Readonly<Record<string, Command>>): number {
+export function dispatch(argv: string[], io: Output, commands: Readonly<Record<string, Command>>): number | Promise<number> {
   const [command, ...args] = argv;
   if (command === undefined || command === '--help' || command === 'help') {
     io.out(`${['Usage:', ...Object.values(commands).map((c) => c.usage)].join('\n  ')}\n`);
@@ -26,16 +28,27 @@ export function dispatch(argv: string[], io: Output, commands: Readonly<Record<s
   try {
     if (!handler) throw new CliInputError(`unknown command "${command}" (commands: ${Object.keys(commands).join(', ')})`);
     const result = handler.run(args);
-    io.out(`${JSON.stringify(result, null, 2)}\n`);
-    return 0;
-  } catch (error) {
-    if (error instanceof CliInputError || isArgumentError(error)) {
-      io.err(`plumbline ${command}: ${oneLine((error as Error).message)}\n`);
-      return 2;
+    if (result instanceof Promise) {
+      return result.then((value) => print(io, value), (error: unknown) => failure(io, command, error));
     }
-    io.err(`plumbline ${command}: unexpected failure: ${oneLine(String((error as Error)?.stack ?? error))}\n`);
-    return 1;
+    return print(io, result);
+  } catch (error) {
+    return failure(io, command, error);
   }
+}
+
+function print(io: Output, result: object): number {
+  io.out(`${JSON.stringify(result, null, 2)}\n`);
+  return 0;
+}
+
+function failure(io: Output, command: string, error: unknown): number {
+  if (error instanceof CliInputError || isArgumentError(error)) {
+    io.err(`plumbline ${command}: ${oneLine((error as Error).message)}\n`);
+    return 2;
+  }
+  io.err(`plumbline ${command}: unexpected failure: ${oneLine(String((error as Error)?.stack ?? error))}\n`);
+  return 1;
 }
 
 /** Errors node's util.parseArgs raises for unknown or malformed options. */

@@ -1,1 +1,2 @@
+/** A missing or malformed setting: the server stops with this message. */
 export class ConfigError extends Error {}

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { loadConfig } from './config.js';
 
-const base = { DATABASE_URL: 'postgres://u:p@127.0.0.1:54329/x', JWT_SECRET: 'x'.repeat(32) };
+const base = { DATABASE_URL: 'postgres://u:p@127.0.0.1:54329/x', JWT_SECRET: 'x'.repeat(32), SMTP_URL: 'smtp://127.0.0.1:1025' };
 
 describe('loadConfig', () => {
   it('fills defaults: loopback host, port 3000, 15-minute access tokens', () => {

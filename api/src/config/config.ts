@@ -1,5 +1,6 @@
 // Configuration is read from the environment once, at start-up, and validated here.
 // A missing or malformed value stops the server with a message naming the variable.
+import { loadAccountsConfig, type AccountsConfig } from './accounts-config.js';
 import { ConfigError } from './config-error.js';
 import { parseTrustProxy, type TrustProxy } from './trust-proxy.js';
 
@@ -25,6 +26,8 @@ export interface AppConfig {
   bodyLimit: string;
   pwaDist: string | null;
   logLevel: string;
+  /** Mail, one-time links and sign-up (accounts-config.ts). */
+  accounts: AccountsConfig;
 }
 
 type Env = Record<string, string | undefined>;
@@ -65,9 +68,11 @@ export function loadConfig(env: Env = process.env): AppConfig {
   if (!/^\d+(b|kb|mb)$/i.test(bodyLimit)) throw new ConfigError(`BODY_LIMIT must look like 100kb or 1mb, got "${bodyLimit}"`);
   const logLevel = env.LOG_LEVEL || 'info';
   if (!LOG_LEVELS.includes(logLevel)) throw new ConfigError(`LOG_LEVEL must be one of ${LOG_LEVELS.join(', ')}`);
+  const host = env.HOST || '127.0.0.1';
+  const port = integer(env, 'PORT', 3000, 0, 65535);
   return {
-    host: env.HOST || '127.0.0.1',
-    port: integer(env, 'PORT', 3000, 0, 65535),
+    host,
+    port,
     databaseUrl,
     jwtSecret,
     accessTokenTtlSeconds: integer(env, 'ACCESS_TOKEN_TTL', 900, 10, 86_400),
@@ -81,5 +86,6 @@ export function loadConfig(env: Env = process.env): AppConfig {
     bodyLimit,
     pwaDist: env.PWA_DIST || null,
     logLevel,
+    accounts: loadAccountsConfig(env, host, port),
   };
 }

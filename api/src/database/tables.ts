@@ -14,7 +14,8 @@ export interface UserRow {
   email: string;
   name: string;
   role: Role;
-  password_hash: string;
+  /** Null for an invited person who has not yet set a password through their link. */
+  password_hash: string | null;
   active: boolean;
   created_at: Date;
   updated_at: Date;
@@ -36,6 +37,19 @@ export interface SessionRow {
   user_id: string;
   created_at: Date;
   revoked_at: Date | null;
+}
+
+export type OneTimeTokenPurpose = 'invitation' | 'password_reset';
+
+/** A one-time link's token: only the SHA-256 of its secret is stored; spent once, expiring. */
+export interface OneTimeTokenRow {
+  id: string;
+  user_id: string;
+  purpose: OneTimeTokenPurpose;
+  token_hash: string;
+  expires_at: Date;
+  used_at: Date | null;
+  created_at: Date;
 }
 
 export interface ProjectRow {
@@ -181,6 +195,8 @@ declare module 'knex/types/tables.js' {
     users: UserRow;
     refresh_tokens: RefreshTokenRow;
     sessions: SessionRow;
+
+    one_time_tokens: OneTimeTokenRow;
     projects: ProjectRow;
     project_members: ProjectMemberRow;
     sign_in_failures: SignInFailureRow;

@@ -25,6 +25,8 @@ export async function openApiDocumentOfApp(): Promise<OpenAPIObject> {
   const config = loadConfig({
     DATABASE_URL: 'postgres://document-only@127.0.0.1:1/none',
     JWT_SECRET: 'only-for-building-the-openapi-document',
+    SMTP_URL: 'smtp://127.0.0.1:1',
+    RUN_JOBS: 'false',
     LOG_LEVEL: 'silent',
   });
   const app = await createApp(config);

@@ -18,16 +18,19 @@ export interface UserSummary {
   name: string;
   role: Role;
   active: boolean;
+  /** invited: no password set yet; disabled: may not sign in; active: may. */
+  status: 'invited' | 'active' | 'disabled';
   createdAt: string;
 }
 
-function summary(row: UserRow): UserSummary {
+export function summary(row: UserRow): UserSummary {
   return {
     id: row.id,
     email: row.email,
     name: row.name,
     role: row.role,
     active: row.active,
+    status: !row.active ? 'disabled' : row.password_hash === null ? 'invited' : 'active',
     createdAt: row.created_at.toISOString(),
   };
 }

@@ -3,11 +3,14 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import { Navigate, Route } from 'react-router-dom';
 import { useStoredSession } from '../db/session-store';
+import { ForgotPasswordPage } from '../features/auth/pages/forgot-password-page';
+import { SetPasswordPage } from '../features/auth/pages/set-password-page';
 import { SignInPage } from '../features/auth/pages/sign-in-page';
+import { SignUpPage } from '../features/auth/pages/sign-up-page';
 import { PlumblineLogo } from '../components/plumbline-logo';
 import { RoleShell } from './shell/role-shell';
 
-/** Signed out: only the sign-in page. Signed in: the role's own shell. */
+/** Signed out: sign-in and the pages of one-time links, forgotten passwords and sign-up. Signed in: the role's own shell. */
 export function AppRoutes() {
   const session = useStoredSession();
   const queryClient = useQueryClient();
@@ -33,6 +36,9 @@ export function AppRoutes() {
     return (
       <IonRouterOutlet>
         <Route path="/sign-in" element={<SignInPage />} />
+        <Route path="/set-password" element={<SetPasswordPage />} />
+        <Route path="/forgot-password" element={<ForgotPasswordPage />} />
+        <Route path="/sign-up" element={<SignUpPage />} />
         <Route path="*" element={<Navigate to="/sign-in" replace />} />
       </IonRouterOutlet>
     );

@@ -1,5 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { IsEmail, IsIn, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, IsIn, MaxLength } from 'class-validator';
+import { IsAcceptablePassword, PASSWORD_MIN_LENGTH } from '../../accounts/password-rule.js';
 import { ROLES, type Role } from '../../common/roles.js';
 import { Name } from '../../common/validation-rules.js';
 
@@ -17,9 +18,7 @@ export class CreateUserDto {
   @IsIn(ROLES, { message: `role must be one of ${ROLES.join(', ')}` })
   role: Role;
 
-  @ApiProperty({ description: 'At least 10 characters' })
-  @IsString()
-  @MinLength(10, { message: 'password must be at least 10 characters long' })
-  @MaxLength(1024)
+  @ApiProperty({ description: `At least ${PASSWORD_MIN_LENGTH} characters, not a commonly used password (the rule of every path that sets one)` })
+  @IsAcceptablePassword()
   password: string;
 }

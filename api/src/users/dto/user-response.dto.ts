@@ -19,6 +19,9 @@ export class UserResponse implements UserSummary {
   @ApiProperty({ description: 'False when the account is disabled' })
   active: boolean;
 
+  @ApiProperty({ enum: ['invited', 'active', 'disabled'], description: 'invited: has not set a password yet; disabled: may not sign in' })
+  status: 'invited' | 'active' | 'disabled';
+
   @ApiProperty({ format: 'date-time' })
   createdAt: string;
 }
