@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { loadConfig } from '../config/config.js';
 import { accountKey, DEVICE_COOKIE, DeviceCookies, readCookie } from './device-cookie.js';
 
-const config = loadConfig({ DATABASE_URL: 'postgres://u:p@127.0.0.1:1/x', JWT_SECRET: 's'.repeat(40) });
+const config = loadConfig({ DATABASE_URL: 'postgres://u:p@127.0.0.1:1/x', JWT_SECRET: 's'.repeat(40), SMTP_URL: 'smtp://127.0.0.1:1' });
 const jwt = new JwtService({ secret: config.jwtSecret });
 const devices = new DeviceCookies(jwt, config);
 
