@@ -213,6 +213,33 @@ describe('the project stage', () => {
   });
 });
 
+describe('the project details', () => {
+  it('changes the sample size and headline question from the project page, saying what a change does', async () => {
+    const api = projectApi('fieldwork');
+    api.on('PATCH', '/api/projects/p9', ({ body }) => {
+      api.on('GET', '/api/projects/p9', () => json({ ...project, status: 'fieldwork', ...(body as object) }));
+      return json({ ...project, status: 'fieldwork', ...(body as object) });
+    });
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.click(await screen.findByRole('button', { name: 'Edit details' }));
+    expect(screen.getByText(/A new sample size recomputes the cell targets/)).toBeInTheDocument();
+    const size = screen.getByLabelText('Target sample size');
+    await user.clear(size);
+    await user.type(size, '450');
+    const question = screen.getByLabelText('Headline question');
+    await user.clear(question);
+    await user.type(question, 'Would you use a late bus on Fridays?');
+    await user.click(screen.getByRole('button', { name: 'Save details' }));
+
+    expect(await screen.findByText('Details saved.')).toBeInTheDocument();
+    expect(screen.getByText('Would you use a late bus on Fridays?')).toBeInTheDocument();
+    expect(api.calls.find((c) => c.method === 'PATCH')?.body).toMatchObject({ targetSize: 450, headlineQuestion: 'Would you use a late bus on Fridays?', name: 'Kestle Vale bus survey' });
+  });
+});
+
 describe('the team', () => {
   it("assigns the agency's people by role", async () => {
     const api = projectApi();

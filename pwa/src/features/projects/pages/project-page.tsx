@@ -3,8 +3,8 @@ import { Link, useParams } from 'react-router-dom';
 import { PageFrame } from '../../../components/page-frame';
 import { QueryView } from '../../../components/query-view';
 import { rememberProject } from '../../../lib/projects/chosen-project';
-import { formatCalendarDate, formatCount } from '../../../lib/format';
 import { useProject } from '../api/get-project';
+import { ProjectDetails } from '../components/project-details';
 import { StatusControl } from '../components/status-control';
 import { TargetsSection } from '../components/targets-section';
 import { TeamSection } from '../components/team-section';
@@ -24,32 +24,10 @@ export function ProjectPage() {
         {(p) => (
           <>
             {p.topic ? <p className="pl-page-lead">{p.topic}</p> : null}
-            <dl className="pl-facts">
-              <div>
-                <dt>Field dates</dt>
-                <dd>
-                  {formatCalendarDate(p.fieldStart)} – {formatCalendarDate(p.fieldEnd)}
-                </dd>
-              </div>
-              <div>
-                <dt>Target sample</dt>
-                <dd>
-                  <span className="pl-figure">{formatCount(p.targetSize)}</span> interviews
-                </dd>
-              </div>
-              {p.timeZone ? (
-                <div>
-                  <dt>Time zone</dt>
-                  <dd>{p.timeZone.replaceAll('_', ' ')}</dd>
-                </div>
-              ) : null}
-              {p.headlineQuestion ? (
-                <div>
-                  <dt>Headline question</dt>
-                  <dd>{p.headlineQuestion}</dd>
-                </div>
-              ) : null}
-            </dl>
+            <section className="pl-section" aria-labelledby="pl-details-heading">
+              <h2 id="pl-details-heading" className="pl-section-title">Details</h2>
+              <ProjectDetails project={p} />
+            </section>
             <p className="pl-project-links">
               <Link to={`/lead/projects/${p.id}/quota-board`} className="pl-back-link">
                 Quota board →
