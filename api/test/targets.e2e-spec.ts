@@ -52,6 +52,30 @@ describe('project set-up', () => {
     expect(started.body.status).toBe('fieldwork');
   });
 
+  it('duplicates a project for a new wave: facts, targets with joint shares and team, in set-up, without interviews', async () => {
+    const created = (await lead.post('/api/projects', {
+      name: 'Wave 1', fieldStart: '2026-12-01', fieldEnd: '2026-12-20', targetSize: 200, headlineQuestion: 'Again?',
+    })).body;
+    const path = `/api/projects/${created.id}`;
+    const parsed = (await lead.upload(`${path}/targets/parse`, 'variable,category,share\nage × sex,young × f,20\nage × sex,young × m,30\nage × sex,old × f,30\nage × sex,old × m,20\nregion,North,1\nregion,South,1\n')).body;
+    await lead.put(`${path}/targets`, parsed);
+    await lead.put(`${path}/members`, { userIds: [org.users.interviewer.id] });
+    const res = await lead.post(`${path}/duplicate`);
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ name: 'Wave 1 (copy)', status: 'setup', targetSize: 200, headlineQuestion: 'Again?', fieldStart: '2026-12-01' });
+    const copy = `/api/projects/${res.body.id}`;
+    const targets = (await lead.get(copy)).status;
+    expect(targets).toBe(200);
+    expect((await lead.get(`${copy}/targets`)).body.interlockBasis).toBe('joint shares');
+    const cells = (await lead.get(`${copy}/cells`)).body.cells as Cell[];
+    expect(cells.find((c) => c.label === 'age: young × sex: m')!.target).toBe(60);
+    expect(cells.every((c) => (c as Cell & { achieved: number }).achieved === 0)).toBe(true);
+    expect((await lead.get(`${copy}/members`)).body.map((m: { id: string }) => m.id)).toEqual([org.users.interviewer.id]);
+    const other = await createOrg(h.db, 'Stranger');
+    const stranger = await client(h, other, 'lead');
+    expect((await stranger.post(`${path}/duplicate`)).status).toBe(404);
+  });
+
   it('lets no supervisor or client create projects', async () => {
     for (const role of ['supervisor', 'client', 'interviewer'] as const) {
       const c = await client(h, org, role);

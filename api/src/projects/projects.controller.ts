@@ -41,6 +41,14 @@ export class ProjectsController {
     return this.projects.update(user, id, dto);
   }
 
+  /** Starts a new wave: the facts, targets and team, in set-up, with no interviews. */
+  @Post(':id/duplicate')
+  @Roles('lead', 'admin')
+  @ApiCreatedResponse({ type: ProjectResponse })
+  duplicate(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.projects.duplicate(user, id);
+  }
+
   @Get(':id/members')
   @Roles('lead', 'admin', 'supervisor')
   @ApiOkResponse({ type: [ProjectMemberResponse] })

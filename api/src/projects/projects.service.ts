@@ -2,6 +2,7 @@ import { BadRequestException, Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
+import { copyProject } from './project-copy.js';
 import type { ProjectRow } from '../database/tables.js';
 import type { CreateProjectDto } from './dto/create-project.dto.js';
 import type { UpdateProjectDto } from './dto/update-project.dto.js';
@@ -138,6 +139,12 @@ export class ProjectsService {
       const message = `Fieldwork cannot start yet: ${missing.join(' and ')}.`;
       throw new BadRequestException({ message, fields: [{ field: 'status', message }] });
     }
+  }
+
+  /** A new project in set-up with this one's facts, targets and team, and none of its interviews. */
+  async duplicate(user: AuthUser, id: string): Promise<ProjectSummary> {
+    const source = await this.access.find(user, id);
+    return projectSummary(await this.db.transaction((trx) => copyProject(trx, source, this.cells)));
   }
 
   async members(user: AuthUser, id: string): Promise<ProjectMember[]> {

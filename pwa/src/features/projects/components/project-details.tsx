@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { formatCalendarDate, formatCount } from '../../../lib/format';
 import type { Project } from '../../../lib/projects/get-projects';
 import { useUpdateProject } from '../api/update-project';
+import { DuplicateProject } from './duplicate-project';
 import { ProjectFactsForm } from './project-facts-form';
 
 /** The project's facts, and a form to change them (the lead can, at any stage). */
@@ -100,6 +101,7 @@ export function ProjectDetails({ project }: { project: Project }) {
         >
           Edit details
         </button>
+        <DuplicateProject project={project} />
       </div>
     </>
   );

@@ -240,6 +240,29 @@ describe('the project details', () => {
   });
 });
 
+describe('a new wave', () => {
+  it('duplicates the project after asking, and opens the copy', async () => {
+    const api = projectApi('closed');
+    api.on('POST', '/api/projects/p9/duplicate', () => {
+      api.on('GET', '/api/projects/p10', () => json({ ...project, id: 'p10', name: 'Kestle Vale bus survey (copy)' }));
+      api.on('GET', '/api/projects/p10/targets', () => json({ variables: [] }));
+      api.on('GET', '/api/projects/p10/cells', () => json({ variables: [], cells: [], refreshedAt: '2026-12-02T10:00:00Z' }));
+      api.on('GET', '/api/projects/p10/members', () => json([]));
+      return json({ ...project, id: 'p10', name: 'Kestle Vale bus survey (copy)' }, 201);
+    });
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.click(await screen.findByRole('button', { name: 'Duplicate for a new wave' }));
+    const dialog = screen.getByRole('dialog', { name: 'Duplicate this project?' });
+    expect(dialog).toHaveTextContent('none of this project’s interviews');
+    expect(api.calls.some((c) => c.method === 'POST')).toBe(false);
+    await user.click(within(dialog).getByRole('button', { name: 'Duplicate' }));
+    expect(await screen.findByRole('heading', { level: 1, name: 'Kestle Vale bus survey (copy)' })).toBeInTheDocument();
+  });
+});
+
 describe('the team', () => {
   it("assigns the agency's people by role", async () => {
     const api = projectApi();
