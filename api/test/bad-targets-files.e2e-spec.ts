@@ -23,6 +23,14 @@ const rows = (variable: string, n: number, label = (i: number) => `c${i}`) =>
   Array.from({ length: n }, (_, i) => `${variable},${label(i)},1`).join('\n');
 
 describe('reading a targets file', () => {
+  it('skips the separator rows spreadsheets write and reads shares written with a % sign', async () => {
+    const csv = 'variable;category;share\nage;young;30%\n;;\nage;old;70%\n;;\nsex;female;51,5\nsex;male;48,5\n';
+    const res = await lead.upload(`${projectPath}/targets/parse`, csv, 'spreadsheet.csv');
+    expect(res.status).toBe(200);
+    expect(res.body.variables.map((v: { name: string; categories: { share: number }[] }) => [v.name, v.categories.map((c) => c.share)]))
+      .toEqual([['age', [30, 70]], ['sex', [51.5, 48.5]]]);
+  });
+
   it.each([
     ['a label over 100 characters', `variable,category,share\nage,young,1\nage,${'o'.repeat(101)},1\n`, 'line 3: variable age: label must be at most 100 characters long'],
     ['over 100 categories', `variable,category,share\n${rows('region', 101)}\n`, 'line 2: variable region: categories may list at most 100 categories'],
@@ -31,6 +39,9 @@ describe('reading a targets file', () => {
     ['a NUL character in a label', 'variable,category,share\nage,you\u0000ng,1\nage,old,1\n', 'line 2: variable age: label must not contain the NUL character'],
     ['a variable name of spaces in quotes', 'variable,category,share\n"  ",young,1\n', 'line 2: variable is empty'],
     ['a column given twice', 'variable,category,share,share\nage,young,1,1\n', 'line 1: column "share" is given twice'],
+    ['a short row, in words of its own', 'variable,category,share\nage,young,30\nage,old\n', 'line 3: has 2 fields; every row needs 3 (variable,category,share), so a comma inside a name needs the name in double quotes'],
+    ['a % sign on some shares of a variable but not others', 'variable,category,share\nage,young,30%\nage,old,0.7\n', 'line 3: variable age: some shares have a % sign and some do not; write them all one way'],
+    ['a quote never closed', 'variable,category,share\nage,"young,30\n', 'line 2: a double quote is opened and never closed'],
   ])('refuses %s, naming the line, as saving would', async (_case, csv, message) => {
     const res = await lead.upload(`${projectPath}/targets/parse`, csv, 'bad.csv');
     expect(res.status).toBe(400);

@@ -26,11 +26,25 @@ export class TargetsFormatError extends Error {}
 
 const COLUMNS = ['variable', 'category', 'share'] as const;
 
-/** Reads a share: "0.25", "25", and with semicolon files also the decimal comma "0,25". */
-function parseShare(text: string, decimalComma: boolean): number | null {
-  const t = text.trim();
+/**
+ * Reads a share: "0.25", "25", "25%", and with semicolon files also the decimal comma "0,25".
+ * A percent sign changes nothing (shares are normalised per variable) but is remembered, so a
+ * variable that mixes "30%" with "0.7" is refused rather than read as 30 and 0.7.
+ */
+function parseShare(text: string, decimalComma: boolean): { value: number; percent: boolean } | null {
+  let t = text.trim();
+  const percent = t.endsWith('%');
+  if (percent) t = t.slice(0, -1).trim();
   const value = parseNumber(decimalComma && /^\d+,\d+$/.test(t) ? t.replace(',', '.') : t);
-  return value !== null && Number.isFinite(value) ? value : null;
+  return value !== null && Number.isFinite(value) ? { value, percent } : null;
+}
+
+/** The CSV reader's own message, in the product's words where we know the case. */
+function plainParseError(error: Error): string {
+  const line = (error as Error & { lines?: number }).lines ?? /line (\d+)/.exec(error.message)?.[1];
+  const where = line ? `line ${line}: ` : '';
+  if (/Quote Not Closed|quote/i.test(error.message)) return `${where}a double quote is opened and never closed`;
+  return `${where}the file could not be read as CSV (${error.message.replace(/\s+/g, ' ')})`;
 }
 
 /** Picks the delimiter from the header line: a semicolon file has no comma in its header. */
@@ -50,9 +64,11 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
   const delimiter = detectDelimiter(body);
   let rows: { record: string[]; info: { lines: number } }[];
   try {
-    rows = parse(body, { delimiter, skip_empty_lines: true, info: true, relax_column_count: false }) as unknown as typeof rows;
+    // Blank rows, and the rows of separators alone (";;") that spreadsheets write, are skipped;
+    // the number of fields per row is checked below, in our own words.
+    rows = parse(body, { delimiter, skip_empty_lines: true, skip_records_with_empty_values: true, info: true, relax_column_count: true }) as unknown as typeof rows;
   } catch (error) {
-    throw new TargetsFormatError(`${source}: ${(error as Error).message.replace(/\s+/g, ' ')}`);
+    throw new TargetsFormatError(`${source}: ${plainParseError(error as Error)}`);
   }
   const [head, ...records] = rows;
   if (!head) throw new TargetsFormatError(`${source}: file is empty`);
@@ -68,6 +84,15 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
   if (extra !== undefined) throw new TargetsFormatError(`${source}: line ${head.info.lines}: unexpected column "${extra}"`);
   if (records.length === 0) throw new TargetsFormatError(`${source}: no rows after the header line`);
   const [iv, ic, is] = COLUMNS.map((c) => header.indexOf(c)) as [number, number, number];
+  for (const { record, info } of records) {
+    if (record.length !== header.length) {
+      throw new TargetsFormatError(
+        `${source}: line ${info.lines}: has ${record.length} ${record.length === 1 ? 'field' : 'fields'}; every row needs ${header.length} ` +
+          `(${head.record.map((h) => h.trim()).join(delimiter)})${delimiter === ',' ? ', so a comma inside a name needs the name in double quotes' : ''}`,
+      );
+    }
+  }
+  const percentSigns = new Map<string, { with: number; without: number; line: number }>();
 
   const byVariable = new Map<string, TargetShare[]>();
   const lines = new Map<string, number>();
@@ -79,7 +104,8 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
     const text = record[is] ?? '';
     if (variable === '') throw new TargetsFormatError(`${source}: line ${line}: variable is empty`);
     if (category === '') throw new TargetsFormatError(`${source}: line ${line}: variable ${variable}: category is empty`);
-    const share = parseShare(text, delimiter === ';');
+    const read = parseShare(text, delimiter === ';');
+    const share = read?.value ?? null;
     if (share === null || share < 0) {
       throw new TargetsFormatError(
         `${source}: line ${line}: variable ${variable} category "${category}": share "${text.trim()}" is not a non-negative number`,
@@ -103,6 +129,13 @@ export function parseTargetsCsv(text: string, source: string): ParsedTargets {
         const partKey = JSON.stringify([part.trim(), (values[v] as string).trim()]);
         if (!partLines.has(partKey)) partLines.set(partKey, line);
       });
+    }
+    const signs = percentSigns.get(variable) ?? { with: 0, without: 0, line };
+    if (read?.percent) signs.with++;
+    else signs.without++;
+    percentSigns.set(variable, signs);
+    if (signs.with > 0 && signs.without > 0) {
+      throw new TargetsFormatError(`${source}: line ${line}: variable ${variable}: some shares have a % sign and some do not; write them all one way`);
     }
     const list = byVariable.get(variable) ?? [];
     list.push({ category, share });
