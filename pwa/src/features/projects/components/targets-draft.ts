@@ -31,16 +31,27 @@ function asTyped(share: number, scale: number): string {
 }
 
 /**
- * Targets from the server (normalised proportions) are shown as percentages; targets
- * read from a file keep the numbers the file gave (scale 1).
+ * Shares are always shown as percentages of their variable, whether they came from the server
+ * (proportions), or from a file in proportions, percentages or census counts: one scale on
+ * screen, whatever the source.
  */
-export function draftFrom(targets: Targets, scale: number): DraftVariable[] {
-  return targets.variables.map((v) => ({
-    key: newKey(),
-    name: v.name,
-    interlocked: Boolean(v.interlocked),
-    categories: v.categories.map((c) => ({ key: newKey(), label: c.label, share: asTyped(c.share, scale) })),
-  }));
+export function draftFrom(targets: Targets): DraftVariable[] {
+  return targets.variables.map((v) => {
+    const total = v.categories.reduce((sum, c) => sum + c.share, 0);
+    return {
+      key: newKey(),
+      name: v.name,
+      interlocked: Boolean(v.interlocked),
+      categories: v.categories.map((c) => ({ key: newKey(), label: c.label, share: asTyped(total > 0 ? c.share / total : 0, 100) })),
+    };
+  });
+}
+
+/** Variables whose typed shares do not add up to 100 (half a point either way), with their totals. */
+export function offTotals(variables: DraftVariable[]): { name: string; total: number }[] {
+  return variables
+    .map((v) => ({ name: v.name.trim() || 'unnamed', total: shareTotal(v) }))
+    .filter(({ total }) => total > 0 && Math.abs(total - 100) > 0.5);
 }
 
 export function parseShare(text: string): number | null {

@@ -4,7 +4,8 @@ import type { Project } from '../../../lib/projects/get-projects';
 import { useTargets, type Targets } from '../api/get-targets';
 import { useSaveTargets } from '../api/save-targets';
 import { CellTargets } from './cell-targets';
-import { blankVariable, checkDraftTargets, draftFrom, type DraftVariable } from './targets-draft';
+import { blankVariable, checkDraftTargets, draftFrom, offTotals, type DraftVariable } from './targets-draft';
+import { ScaleSharesDialog } from './scale-shares-dialog';
 import { JointSharesNote, type HeldJoint } from './joint-shares-note';
 import { TargetsUpload } from './targets-upload';
 import { VariableEditor } from './variable-editor';
@@ -27,18 +28,20 @@ function heldJoint(targets: Targets, source: string): HeldJoint | null {
 
 function TargetsEditor({ project, saved }: { project: Project; saved: Targets }) {
   const save = useSaveTargets(project.id);
-  const [draft, setDraft] = useState<DraftVariable[]>(() => (saved.variables.length ? draftFrom(saved, 100) : [blankVariable()]));
+  const [draft, setDraft] = useState<DraftVariable[]>(() => (saved.variables.length ? draftFrom(saved) : [blankVariable()]));
   const [fromFile, setFromFile] = useState<string | null>(null);
   const [problems, setProblems] = useState<string[]>([]);
   const [savedNote, setSavedNote] = useState(false);
   const [joint, setJoint] = useState<HeldJoint | null>(() => heldJoint(saved, 'saved'));
+  const [scaling, setScaling] = useState<{ name: string; total: number }[] | null>(null);
   const interlocked = draft.filter((v) => v.interlocked).map((v) => v.name.trim() || 'unnamed');
 
   const change = (next: DraftVariable[]) => {
     setDraft(next);
     setSavedNote(false);
   };
-  const submit = () => {
+  const submit = (scaleConfirmed = false) => {
+    setScaling(null);
     const checked = checkDraftTargets(draft);
     if (joint && joint.variables.join('\u0000') !== interlocked.join('\u0000')) {
       checked.problems.push(
@@ -47,6 +50,11 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
     }
     setProblems(checked.problems);
     if (!checked.targets || checked.problems.length > 0) return;
+    const off = offTotals(draft);
+    if (off.length > 0 && !scaleConfirmed) {
+      setScaling(off);
+      return;
+    }
     save.mutate(joint ? { ...checked.targets, jointShares: joint.shares } : checked.targets, {
       onSuccess: () => {
         setFromFile(null);
@@ -65,7 +73,7 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
       <TargetsUpload
         projectId={project.id}
         onRead={(targets, name) => {
-          change(draftFrom(targets, 1));
+          change(draftFrom(targets));
           setJoint(heldJoint(targets, name));
           setFromFile(name);
         }}
@@ -115,10 +123,11 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
         <button type="button" className="pl-button pl-button-quiet" onClick={() => change([...draft, blankVariable()])}>
           Add a variable
         </button>
-        <button type="button" className="pl-button pl-button-main" onClick={submit} disabled={save.isPending}>
+        <button type="button" className="pl-button pl-button-main" onClick={() => submit()} disabled={save.isPending}>
           {save.isPending ? 'Saving…' : 'Save targets'}
         </button>
       </div>
+      {scaling ? <ScaleSharesDialog totals={scaling} onConfirm={() => submit(true)} onCancel={() => setScaling(null)} /> : null}
       {savedNote ? (
         <p className="pl-saved" role="status">
           Targets saved; the cell targets below are recomputed.

@@ -148,6 +148,41 @@ describe('quota targets from a CSV file', () => {
   });
 });
 
+describe('one scale for shares', () => {
+  it('shows a file in proportions as percentages, and asks before saving shares that do not add up to 100', async () => {
+    const api = projectApi();
+    api.on('POST', '/api/projects/p9/targets/parse', () =>
+      json({ variables: [{ name: 'age_band', interlocked: false, categories: [{ label: '18-34', share: 0.3 }, { label: '35+', share: 0.7 }] }] }),
+    );
+    api.on('PUT', '/api/projects/p9/targets', ({ body }) => json(body));
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.upload(await screen.findByLabelText('Targets file (CSV: variable,category,share)'), csv());
+    await user.click(screen.getByRole('button', { name: 'Read file' }));
+    expect(await screen.findByText(/Read from targets\.csv: 1 variable\./)).toBeInTheDocument();
+    expect(screen.getByLabelText('age_band: share of 18-34')).toHaveValue('30');
+    expect(screen.getByLabelText('age_band: share of 35+')).toHaveValue('70');
+
+    const young = screen.getByLabelText('age_band: share of 18-34');
+    await user.clear(young);
+    await user.type(young, '45');
+    await user.click(screen.getByRole('button', { name: 'Save targets' }));
+    const dialog = screen.getByRole('dialog', { name: 'Shares do not add up to 100%' });
+    expect(dialog).toHaveTextContent('age_band: 115.00');
+    await user.click(within(dialog).getByRole('button', { name: 'Go back' }));
+    expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
+
+    await user.click(screen.getByRole('button', { name: 'Save targets' }));
+    await user.click(within(screen.getByRole('dialog', { name: 'Shares do not add up to 100%' })).getByRole('button', { name: 'Save scaled to 100%' }));
+    expect(await screen.findByText(/Targets saved/)).toBeInTheDocument();
+    expect(api.calls.find((c) => c.method === 'PUT')?.body).toMatchObject({
+      variables: [{ name: 'age_band', categories: [{ label: '18-34', share: 45 }, { label: '35+', share: 70 }] }],
+    });
+  });
+});
+
 describe('quota targets typed in', () => {
   it('refuses a lone interlocked variable and a share that is not a number, and sends nothing', async () => {
     const api = projectApi();
