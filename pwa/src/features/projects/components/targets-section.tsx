@@ -5,6 +5,7 @@ import { useTargets, type Targets } from '../api/get-targets';
 import { useSaveTargets } from '../api/save-targets';
 import { CellTargets } from './cell-targets';
 import { blankVariable, checkDraftTargets, draftFrom, offTotals, type DraftVariable } from './targets-draft';
+import { RemoveVariableDialog } from './remove-variable-dialog';
 import { ScaleSharesDialog } from './scale-shares-dialog';
 import { JointSharesNote, type HeldJoint } from './joint-shares-note';
 import { TargetsUpload } from './targets-upload';
@@ -34,6 +35,7 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
   const [savedNote, setSavedNote] = useState(false);
   const [joint, setJoint] = useState<HeldJoint | null>(() => heldJoint(saved, 'saved'));
   const [scaling, setScaling] = useState<{ name: string; total: number }[] | null>(null);
+  const [removing, setRemoving] = useState<DraftVariable | null>(null);
   const interlocked = draft.filter((v) => v.interlocked).map((v) => v.name.trim() || 'unnamed');
 
   const change = (next: DraftVariable[]) => {
@@ -91,7 +93,9 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
             variable={variable}
             position={index + 1}
             onChange={(next) => change(draft.map((v) => (v.key === variable.key ? next : v)))}
-            onRemove={() => change(draft.filter((v) => v.key !== variable.key))}
+            onRemove={() =>
+              project.status === 'setup' ? change(draft.filter((v) => v.key !== variable.key)) : setRemoving(variable)
+            }
           />
         ))}
       </div>
@@ -127,6 +131,16 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
           {save.isPending ? 'Saving…' : 'Save targets'}
         </button>
       </div>
+      {removing ? (
+        <RemoveVariableDialog
+          name={removing.name.trim() || 'this variable'}
+          onConfirm={() => {
+            change(draft.filter((v) => v.key !== removing.key));
+            setRemoving(null);
+          }}
+          onCancel={() => setRemoving(null)}
+        />
+      ) : null}
       {scaling ? <ScaleSharesDialog totals={scaling} onConfirm={() => submit(true)} onCancel={() => setScaling(null)} /> : null}
       {savedNote ? (
         <p className="pl-saved" role="status">

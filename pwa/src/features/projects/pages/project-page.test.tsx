@@ -183,6 +183,32 @@ describe('one scale for shares', () => {
   });
 });
 
+describe('removing a variable mid-field', () => {
+  it('asks first and says the interviews are kept; Keep it changes nothing', async () => {
+    const api = projectApi('fieldwork');
+    api.on('GET', '/api/projects/p9/targets', () =>
+      json({ variables: [
+        { name: 'age_band', interlocked: false, categories: [{ label: '18-34', share: 0.3 }, { label: '35+', share: 0.7 }] },
+        { name: 'region', interlocked: false, categories: [{ label: 'North', share: 0.5 }, { label: 'South', share: 0.5 }] },
+      ], jointShares: [], interlockBasis: null }),
+    );
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.click(await screen.findByRole('button', { name: 'Remove region' }));
+    const dialog = screen.getByRole('dialog', { name: 'Remove region?' });
+    expect(dialog).toHaveTextContent('every interview already logged is kept');
+    await user.click(within(dialog).getByRole('button', { name: 'Keep it' }));
+    expect(screen.getByLabelText('region: share of North')).toBeInTheDocument();
+
+    await user.click(screen.getByRole('button', { name: 'Remove region' }));
+    await user.click(within(screen.getByRole('dialog', { name: 'Remove region?' })).getByRole('button', { name: 'Remove region' }));
+    expect(screen.queryByLabelText('region: share of North')).not.toBeInTheDocument();
+    expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
+  });
+});
+
 describe('quota targets typed in', () => {
   it('refuses a lone interlocked variable and a share that is not a number, and sends nothing', async () => {
     const api = projectApi();
