@@ -7,9 +7,17 @@ import { FormProblem } from '../../../components/form-problem';
 export const offlineSignInMessage =
   'You are offline: signing in needs the network once; work already on this device is kept.';
 
+/** Field problems in the words of this form, not the API's (which name the field itself). */
+const fieldWords: Record<string, string> = {
+  email: 'That is not an e-mail address: check it for a typing slip.',
+  password: 'Enter your password.',
+};
+
 function messageFor(error: unknown): string {
   if (isApiError(error)) {
     if (error.kind === 'offline') return offlineSignInMessage;
+    // A problem with a field is shown at the field; the summary only points there.
+    if (error.fields.some((f) => f.field in fieldWords)) return 'Not signed in: see the marked field below.';
     return error.message;
   }
   return 'Signing in failed. Please try again.';
@@ -23,7 +31,7 @@ export function SignInForm() {
   const ids = { email: useId(), password: useId(), problem: useId() };
 
   const fieldProblems = isApiError(signIn.error) ? signIn.error.fields : [];
-  const problemFor = (field: string) => fieldProblems.find((p) => p.field === field)?.message;
+  const problemFor = (field: string) => (fieldProblems.some((p) => p.field === field) ? fieldWords[field] : undefined);
 
   function submit(event: FormEvent) {
     event.preventDefault();

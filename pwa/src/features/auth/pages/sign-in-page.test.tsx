@@ -28,6 +28,24 @@ describe('sign-in page', () => {
     expect(await readSession()).toBeUndefined();
   });
 
+  it('tells an address the server cannot take once, at the field, in words of its own', async () => {
+    const api = installFakeApi();
+    api.on('POST', '/api/auth/login', () =>
+      json({ statusCode: 400, error: 'Bad Request', message: 'email must be an e-mail address', fields: [{ field: 'email', message: 'email must be an e-mail address' }] }, 400),
+    );
+    renderApp('/sign-in');
+    const user = userEvent.setup();
+
+    await user.type(await screen.findByLabelText('E-mail'), 'x@y.z');
+    await user.type(screen.getByLabelText('Password'), 'whatever-it-is');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    expect(await screen.findByRole('alert')).toHaveTextContent('Not signed in: see the marked field below.');
+    expect(screen.getByText('That is not an e-mail address: check it for a typing slip.')).toBeInTheDocument();
+    expect(screen.queryByText('email must be an e-mail address')).not.toBeInTheDocument();
+    expect(screen.getByLabelText('E-mail')).toHaveAttribute('aria-invalid', 'true');
+  });
+
   it('says so, and how long to wait, when there have been too many attempts', async () => {
     const api = installFakeApi();
     api.on('POST', '/api/auth/login', () => {
