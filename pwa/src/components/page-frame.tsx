@@ -11,6 +11,9 @@ interface PageFrameProps {
   children: ReactNode;
 }
 
+/** Titles longer than this may not fit a 360 px header. */
+const LONG_TITLE = 18;
+
 /** Every signed-in page: header with logo, title, online state and account; then content. */
 export function PageFrame({ title, lead, children }: PageFrameProps) {
   const headerSlot = useHeaderSlot();
@@ -31,6 +34,12 @@ export function PageFrame({ title, lead, children }: PageFrameProps) {
       </IonHeader>
       <IonContent className="pl-content">
         <div className="pl-page-body">
+          {/* A long title is cut short in a phone's header: the page repeats it in full (the heading keeps it for screen readers). */}
+          {title.length > LONG_TITLE ? (
+            <p className="pl-page-fulltitle" aria-hidden="true">
+              {title}
+            </p>
+          ) : null}
           {lead ? <p className="pl-page-lead">{lead}</p> : null}
           {children}
         </div>

@@ -48,7 +48,7 @@ export function CellCheckStep({ cells, syncedAt, onStart, onBack }: CellCheckSte
         ))}
       </ul>
       {syncedAt ? (
-        <p className="pl-muted pl-small">From the sync of {formatMoment(syncedAt)}, with this device’s unsent interviews counted.</p>
+        <p className="pl-muted pl-small">From the sync of {formatMoment(syncedAt)}, with this device’s unsent completes counted.</p>
       ) : null}
       <div className="pl-step-actions">
         <button

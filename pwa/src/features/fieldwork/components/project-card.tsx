@@ -34,7 +34,7 @@ export function ProjectCard({ project, status, onLog }: ProjectCardProps) {
               </li>
             ))}
           </ul>
-          <p className="pl-muted pl-small">Cells as of the sync {formatMoment(status.syncedAt)}, with your unsent interviews counted.</p>
+          <p className="pl-muted pl-small">Cells as of the sync {formatMoment(status.syncedAt)}, with your unsent completes counted.</p>
         </>
       ) : (
         <p className="pl-muted pl-small">Cell status appears after this device’s first sync.</p>

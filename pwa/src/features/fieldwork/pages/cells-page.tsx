@@ -29,7 +29,7 @@ export function CellsPage() {
               {status ? (
                 <>
                   <p className="pl-muted pl-small">
-                    As of the sync {formatMoment(status.syncedAt)}, with your unsent interviews counted.
+                    As of the sync {formatMoment(status.syncedAt)}, with your unsent completes counted.
                   </p>
                   <CellTable title="Crossed cells" cells={status.cells.filter((c) => c.kind === 'interlocked')} />
                   <CellTable title="Single-variable cells" cells={status.cells.filter((c) => c.kind === 'margin')} />
