@@ -148,6 +148,20 @@ describe('quota targets from a CSV file', () => {
   });
 });
 
+describe('a targets file too large to send', () => {
+  it('says so on the device, naming the limit, and sends nothing', async () => {
+    const api = projectApi();
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+    const big = new File(['x'.repeat(300 * 1024)], 'census.csv', { type: 'text/csv' });
+    await user.upload(await screen.findByLabelText('Targets file (CSV: variable,category,share)'), big);
+    expect(await screen.findByRole('alert')).toHaveTextContent('census.csv is 300 KB; a targets file may be at most 256 KB. Nothing was sent.');
+    expect(screen.getByRole('button', { name: 'Read file' })).toBeDisabled();
+    expect(api.calls.some((c) => c.method === 'POST')).toBe(false);
+  });
+});
+
 describe('one scale for shares', () => {
   it('shows a file in proportions as percentages, and asks before saving shares that do not add up to 100', async () => {
     const api = projectApi();
