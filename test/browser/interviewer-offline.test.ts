@@ -38,12 +38,12 @@ describe('interviewer offline at phone size', () => {
       await answerAndSave(page, respondent.answer, shots);
     }
     await screenshot(page, 'interviewer-3-today-five-waiting');
-    await page.getByText('5 contacts waiting in the outbox').waitFor();
+    await page.getByText('5 unsent interviews in the outbox').waitFor();
 
     await page.reload();
     await page.getByRole('heading', { level: 1, name: 'Today' }).waitFor();
     await page.getByRole('link', { name: 'Outbox', exact: true }).click();
-    await page.getByText('unsent contacts on this device').waitFor();
+    await page.getByText('unsent interviews on this device').waitFor();
     await page.getByRole('heading', { level: 1, name: 'Today' }).waitFor({ state: 'hidden' });
     const waiting = page.getByRole('list', { name: 'Waiting to be sent' }).getByRole('listitem');
     expect(await waiting.count()).toBe(5);

@@ -47,7 +47,7 @@ describe('an office out of reach while the phone claims to be online', () => {
     await page.getByRole('button', { name: 'Save interview' }).click();
     await page.getByText('Complete saved on this device.').waitFor();
     await page.getByRole('link', { name: 'Outbox', exact: true }).click();
-    await page.getByText('unsent contact on this device').waitFor();
+    await page.getByText('unsent interview on this device').waitFor();
     expect(await page.locator('.pl-outbox-number').textContent()).toBe('1');
 
     // A long outage: the device keeps trying, and says when it tries next.

@@ -1,5 +1,5 @@
 // POST /api/auth/logout, then delete the device's session row. Only the session row:
-// the outbox keeps every unsent contact for when the same interviewer signs in again.
+// the outbox keeps every unsent interview for when the same interviewer signs in again.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import { clearSession, readSession } from '../../../db/session-store';

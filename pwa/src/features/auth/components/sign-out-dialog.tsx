@@ -10,7 +10,7 @@ interface SignOutDialogProps {
 }
 
 function interviews(count: number): string {
-  return count === 1 ? '1 unsent contact' : `${count} unsent contacts`;
+  return count === 1 ? '1 unsent interview' : `${count} unsent interviews`;
 }
 
 export function SignOutDialog({ user, onClose }: SignOutDialogProps) {

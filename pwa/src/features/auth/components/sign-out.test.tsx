@@ -20,7 +20,7 @@ async function addUnsentInterviews(count: number, interviewerId = 'user-intervie
 }
 
 describe('signing out', () => {
-  it('warns that unsent contacts stay on the device, signs out, and keeps them', async () => {
+  it('warns that unsent interviews stay on the device, signs out, and keeps them', async () => {
     const api = installFakeApi();
     api.on('POST', '/api/auth/logout', () => new Response(null, { status: 204 }));
     await signedInAs('interviewer');
@@ -37,7 +37,7 @@ describe('signing out', () => {
 
     const confirm = await screen.findByRole('dialog', { name: 'Sign out of Plumbline?' });
     expect(confirm).toHaveTextContent(
-      '2 unsent contacts will stay on this device. They will be sent after Ines Marr signs in again on this device.',
+      '2 unsent interviews will stay on this device. They will be sent after Ines Marr signs in again on this device.',
     );
     await user.click(within(confirm).getByRole('button', { name: 'Sign out' }));
 
@@ -59,7 +59,7 @@ describe('signing out', () => {
     await user.click(await screen.findByRole('button', { name: 'Account: Ines Marr' }));
     await user.click(within(await screen.findByRole('dialog', { name: 'Account' })).getByRole('button', { name: 'Sign out' }));
     const confirm = await screen.findByRole('dialog', { name: 'Sign out of Plumbline?' });
-    expect(confirm).toHaveTextContent('1 unsent contact will stay on this device.');
+    expect(confirm).toHaveTextContent('1 unsent interview will stay on this device.');
     await user.click(within(confirm).getByRole('button', { name: 'Sign out' }));
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();
@@ -77,7 +77,7 @@ describe('signing out', () => {
     await user.click(await screen.findByRole('button', { name: 'Account: Ines Marr' }));
     await user.click(within(await screen.findByRole('dialog', { name: 'Account' })).getByRole('button', { name: 'Sign out' }));
     const confirm = await screen.findByRole('dialog', { name: 'Sign out of Plumbline?' });
-    expect(confirm).toHaveTextContent('2 unsent contacts will stay on this device.');
+    expect(confirm).toHaveTextContent('2 unsent interviews will stay on this device.');
     await user.click(within(confirm).getByRole('button', { name: 'Sign out' }));
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();

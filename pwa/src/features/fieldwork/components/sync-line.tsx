@@ -8,7 +8,7 @@ export function SyncLine({ waiting, lastSync }: { waiting: number; lastSync: str
   return (
     <p className="pl-sync-line" role="status">
       <Link to="/interviewer/outbox" className="pl-sync-link">
-        <span className="pl-figure">{formatCount(waiting)}</span> {waiting === 1 ? 'contact' : 'contacts'} waiting in the outbox
+        <span className="pl-figure">{formatCount(waiting)}</span> {waiting === 1 ? 'unsent interview' : 'unsent interviews'} in the outbox
       </Link>
       <span className="pl-muted pl-small">
         {progress.running ? 'Syncing…' : `Last sync ${lastSync ? formatMoment(lastSync) : 'not yet on this device'}`}

@@ -20,7 +20,7 @@ describe('outbox page', () => {
     await signedInAs('interviewer');
     renderApp('/interviewer/outbox');
 
-    expect(await screen.findByText('unsent contacts on this device')).toBeInTheDocument();
+    expect(await screen.findByText('unsent interviews on this device')).toBeInTheDocument();
     expect(screen.getByText('0')).toBeInTheDocument();
     expect(screen.getByText(/kept on this device until the office has it/)).toBeInTheDocument();
     expect(screen.getByText('Nothing is waiting to be sent.')).toBeInTheDocument();
@@ -33,7 +33,7 @@ describe('outbox page', () => {
     await db.outbox.bulkAdd([completeEntry(1, me, who), completeEntry(2, me, who), completeEntry(3, 'user-other', who)]);
     renderApp('/interviewer/outbox');
 
-    expect(await screen.findByText('unsent contacts on this device')).toBeInTheDocument();
+    expect(await screen.findByText('unsent interviews on this device')).toBeInTheDocument();
     const list = screen.getByRole('list', { name: 'Waiting to be sent' });
     expect(within(list).getAllByRole('listitem')).toHaveLength(2);
     expect(within(list).getAllByText('Complete')).toHaveLength(2);
@@ -44,7 +44,7 @@ describe('outbox page', () => {
     // Send now still tries (the browser's online flag is not trusted); with the network cut it keeps everything.
     await userEvent.setup().click(screen.getByRole('button', { name: 'Send now' }));
     await whenSyncIdle();
-    expect(screen.getByText(/Nothing is lost: unsent contacts stay here/)).toBeInTheDocument();
+    expect(screen.getByText(/Nothing is lost: unsent interviews stay here/)).toBeInTheDocument();
     expect(await screen.findByText(/Office not reachable since \d\d:\d\d/)).toBeInTheDocument();
     expect(await db.outbox.count()).toBe(3);
   });

@@ -37,7 +37,7 @@ export function OutboxPage() {
           <section className="pl-outbox" aria-label="Unsent interviews">
             <p className="pl-outbox-count">
               <span className="pl-figure pl-outbox-number">{formatCount(waiting.length)}</span>
-              <span>{waiting.length === 1 ? 'unsent contact' : 'unsent contacts'} on this device</span>
+              <span>{waiting.length === 1 ? 'unsent interview' : 'unsent interviews'} on this device</span>
             </p>
             <p>
               Every contact you log is kept on this device until the office has it. Signing out, closing the app or
@@ -45,7 +45,7 @@ export function OutboxPage() {
             </p>
             {!online ? (
               <p className="pl-note-offline" role="status">
-                The office cannot be reached right now. Nothing is lost: unsent contacts stay here and go to the office as soon as it answers.
+                The office cannot be reached right now. Nothing is lost: unsent interviews stay here and go to the office as soon as it answers.
               </p>
             ) : null}
             <SendPanel waiting={waiting.length} lastSync={lastSync} />
