@@ -1,8 +1,6 @@
-import { withInterval, type ImpliedBiasFactor, type OutcomeCell } from './bias-factor.js';
+import { logit, withInterval, type ImpliedBiasFactor, type OutcomeCell } from './bias-factor.js';
 import { EstimationInputError } from './errors.js';
 import { rake, type MarginTarget, type RakingCell, type RakingOptions } from './raking.js';
-
-const logit = (p: number): number => Math.log(p / (1 - p));
 
 /**
  * Implied bias factor with a delete-one jackknife interval (Quenouille 1956; Wolter 2007,

@@ -70,8 +70,10 @@ function checkJoint(t: MarginTarget, parts: string[]): MarginTarget {
   }
   const shares = normaliseShares(t);
   const levels: string[][] = parts.map(() => []);
-  for (const s of t.shares) {
-    const values = s.category.split(JOINT_SEPARATOR).map((c) => c.trim());
+  // Each category's parts, read once: "18-24 × female" → ["18-24", "female"].
+  const split = t.shares.map((s) => s.category.split(JOINT_SEPARATOR).map((c) => c.trim()));
+  for (const [i, s] of t.shares.entries()) {
+    const values = split[i] as string[];
     if (values.length !== parts.length || values.some((c) => c === '')) {
       throw new EstimationInputError(
         `variable ${t.variable}: category "${s.category}" must name one category of each of ${parts.join(', ')}, joined by "${JOINT_SEPARATOR.trim()}"`,
@@ -82,7 +84,7 @@ function checkJoint(t: MarginTarget, parts: string[]): MarginTarget {
       if (!list.includes(c)) list.push(c);
     });
   }
-  const given = new Set(t.shares.map((s) => s.category.split(JOINT_SEPARATOR).map((c) => c.trim()).join(JOINT_SEPARATOR)));
+  const given = new Set(split.map((values) => values.join(JOINT_SEPARATOR)));
   const combinations = levels.reduce<string[][]>((acc, list) => acc.flatMap((prefix) => list.map((c) => [...prefix, c])), [[]]);
   const missing = combinations.find((c) => !given.has(c.join(JOINT_SEPARATOR)));
   if (missing) {
@@ -91,7 +93,7 @@ function checkJoint(t: MarginTarget, parts: string[]): MarginTarget {
   return {
     variable: parts.join(JOINT_SEPARATOR),
     parts,
-    shares: t.shares.map((s, i) => ({ category: s.category.split(JOINT_SEPARATOR).map((c) => c.trim()).join(JOINT_SEPARATOR), share: shares[i] as number })),
+    shares: split.map((values, i) => ({ category: values.join(JOINT_SEPARATOR), share: shares[i] as number })),
   };
 }
 

@@ -49,7 +49,11 @@ export interface VariableView {
 }
 
 export async function loadVariableViews(db: Knex, projectId: string): Promise<VariableView[]> {
-  const { variables } = await loadActiveTargets(db, projectId);
+  return variableViews((await loadActiveTargets(db, projectId)).variables);
+}
+
+/** The API's view of variables already loaded (loadActiveTargets). */
+export function variableViews(variables: ActiveTargets['variables']): VariableView[] {
   return variables.map((v) => ({
     id: v.id,
     name: v.name,

@@ -9,7 +9,7 @@ import { EstimationInputError } from '../estimation/errors.js';
 import { JOINT_SEPARATOR } from '../estimation/joint-names.js';
 import { resolveTargets } from '../estimation/joint-targets.js';
 import type { MarginTarget } from '../estimation/raking.js';
-import { CellAllocator, loadActiveTargets, loadJointTable, loadVariableViews, type VariableView } from './cell-allocator.js';
+import { CellAllocator, loadActiveTargets, loadJointTable, variableViews, type VariableView } from './cell-allocator.js';
 import { SaveTargetsDto } from './dto/targets.dto.js';
 import { validateAs } from '../common/validation.js';
 import { atLine } from './targets-file-lines.js';
@@ -110,12 +110,11 @@ export class TargetsService {
   ) {}
 
   async get(projectId: string): Promise<TargetsView> {
-    const variables = await loadVariableViews(this.db, projectId);
     const { variables: active } = await loadActiveTargets(this.db, projectId);
     const joint = await loadJointTable(this.db, projectId, active);
-    const interlocked = variables.some((v) => v.interlocked);
+    const interlocked = active.some((v) => v.interlocked);
     return {
-      variables,
+      variables: variableViews(active),
       jointShares: joint ? joint.shares.map((s) => ({ categories: s.category.split(JOINT_SEPARATOR), share: s.share })) : [],
       interlockBasis: !interlocked ? null : joint ? 'joint shares' : 'product of margins',
     };

@@ -1,7 +1,6 @@
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { Dialog } from '../../../components/dialog';
-import { FormProblem } from '../../../components/form-problem';
+import { ConfirmDialog } from '../../../components/confirm-dialog';
 import type { Project } from '../../../lib/projects/get-projects';
 import { useDuplicateProject } from '../api/duplicate-project';
 
@@ -20,26 +19,19 @@ export function DuplicateProject({ project }: { project: Project }) {
         Duplicate for a new wave
       </button>
       {asking ? (
-        <Dialog title="Duplicate this project?" onClose={close} placement="sheet">
+        <ConfirmDialog
+          title="Duplicate this project?"
+          confirmLabel={duplicate.isPending ? 'Duplicating…' : 'Duplicate'}
+          busy={duplicate.isPending}
+          problem={duplicate.error?.message}
+          onConfirm={() => duplicate.mutate(undefined, { onSuccess: (copy) => navigate(`/lead/projects/${copy.id}`) })}
+          onCancel={close}
+        >
           <p>
             A new project, “{project.name} (copy)”, in set-up with the same details, quota targets and team, and none of
             this project’s interviews. Change its name and field dates there; this project stays as it is.
           </p>
-          <FormProblem message={duplicate.error?.message} />
-          <div className="pl-dialog-actions">
-            <button type="button" className="pl-button pl-button-quiet" onClick={close}>
-              Cancel
-            </button>
-            <button
-              type="button"
-              className="pl-button pl-button-main"
-              disabled={duplicate.isPending}
-              onClick={() => duplicate.mutate(undefined, { onSuccess: (copy) => navigate(`/lead/projects/${copy.id}`) })}
-            >
-              {duplicate.isPending ? 'Duplicating…' : 'Duplicate'}
-            </button>
-          </div>
-        </Dialog>
+        </ConfirmDialog>
       ) : null}
     </>
   );

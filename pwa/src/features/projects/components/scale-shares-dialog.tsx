@@ -1,4 +1,4 @@
-import { Dialog } from '../../../components/dialog';
+import { ConfirmDialog } from '../../../components/confirm-dialog';
 import { formatDecimal } from '../../../lib/format';
 
 interface ScaleSharesDialogProps {
@@ -10,7 +10,14 @@ interface ScaleSharesDialogProps {
 /** Asks before shares that do not add up to 100% are saved scaled to 100%. */
 export function ScaleSharesDialog({ totals, onConfirm, onCancel }: ScaleSharesDialogProps) {
   return (
-    <Dialog title="Shares do not add up to 100%" onClose={onCancel} placement="sheet">
+    <ConfirmDialog
+      title="Shares do not add up to 100%"
+      confirmLabel="Save scaled to 100%"
+      cancelLabel="Go back"
+      main="cancel"
+      onConfirm={onConfirm}
+      onCancel={onCancel}
+    >
       <ul>
         {totals.map(({ name, total }) => (
           <li key={name}>
@@ -22,14 +29,6 @@ export function ScaleSharesDialog({ totals, onConfirm, onCancel }: ScaleSharesDi
         Saved as they are, each of these is scaled to 100%, keeping the proportions between its categories. That is right
         for census counts; for a typing slip, go back and correct it.
       </p>
-      <div className="pl-dialog-actions">
-        <button type="button" className="pl-button pl-button-quiet" onClick={onConfirm}>
-          Save scaled to 100%
-        </button>
-        <button type="button" className="pl-button pl-button-main" onClick={onCancel} autoFocus>
-          Go back
-        </button>
-      </div>
-    </Dialog>
+    </ConfirmDialog>
   );
 }

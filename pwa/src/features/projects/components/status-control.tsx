@@ -1,6 +1,5 @@
 import { useState } from 'react';
-import { Dialog } from '../../../components/dialog';
-import { FormProblem } from '../../../components/form-problem';
+import { ConfirmDialog } from '../../../components/confirm-dialog';
 import type { Project } from '../../../lib/projects/get-projects';
 import { useUpdateProject, type ProjectStatus } from '../api/update-project';
 
@@ -82,23 +81,16 @@ export function StatusControl({ project }: { project: Project }) {
         ))}
       </div>
       {asking ? (
-        <Dialog title={asking.question} onClose={close} placement="sheet">
+        <ConfirmDialog
+          title={asking.question}
+          confirmLabel={asking.label}
+          busy={update.isPending}
+          problem={update.error?.message}
+          onConfirm={() => update.mutate({ status: asking.to }, { onSuccess: () => setAsking(null) })}
+          onCancel={close}
+        >
           <p>{asking.effect}</p>
-          <FormProblem message={update.error?.message} />
-          <div className="pl-dialog-actions">
-            <button type="button" className="pl-button pl-button-quiet" onClick={close}>
-              Cancel
-            </button>
-            <button
-              type="button"
-              className="pl-button pl-button-main"
-              disabled={update.isPending}
-              onClick={() => update.mutate({ status: asking.to }, { onSuccess: () => setAsking(null) })}
-            >
-              {asking.label}
-            </button>
-          </div>
-        </Dialog>
+        </ConfirmDialog>
       ) : null}
     </div>
   );
