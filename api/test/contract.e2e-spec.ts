@@ -78,6 +78,7 @@ describe('answers match the OpenAPI document', () => {
     const csv = 'variable,category,share\nage,18-34,30\nage,35+,70\nage × sex,18-34 × female,16\nage × sex,18-34 × male,14\nage × sex,35+ × female,36\nage × sex,35+ × male,34\nsex,female,52\nsex,male,48\n';
     conforms(await lead.upload(`${project()}/targets/parse`, csv), 'post', '/api/projects/{projectId}/targets/parse', 200);
     conforms(await lead.upload(`${project()}/targets/parse`, 'variable,category,share\nregion,North,1\nregion,South,1\n'), 'post', '/api/projects/{projectId}/targets/parse', 200);
+    conforms(await lead.post(`${project()}/targets/preview`, TARGETS), 'post', '/api/projects/{projectId}/targets/preview', 200);
     const saved = await lead.put(`${project()}/targets`, TARGETS);
     conforms(saved, 'put', '/api/projects/{projectId}/targets', 200);
     targets = saved.body;

@@ -189,6 +189,30 @@ describe('targets and cells', () => {
     expect(Number((await h.db('interviews').where({ project_id: org.projectId }).count({ n: '*' }))[0]!.n)).toBe(2);
   });
 
+  it('previews the cells new targets would give, with the interviews already in them, and saves nothing', async () => {
+    const before = (await lead.get(`${projectPath}/cells`)).body.cells;
+    const targetsBefore = (await lead.get(`${projectPath}/targets`)).body;
+    const edited = {
+      variables: [
+        { ...TARGETS.variables[0], categories: [{ label: '18-34', share: 0.5 }, { label: '35-59', share: 0.25 }, { label: '60+', share: 0.25 }] },
+        TARGETS.variables[1],
+      ],
+    };
+    const res = await lead.post(`${projectPath}/targets/preview`, edited);
+    expect(res.status).toBe(200);
+    const cells: (Cell & { achieved: number })[] = res.body.cells;
+    // 200 interviews × 0.5 × 0.52 = 52 (whole numbers by largest remainder still add up to 200).
+    expect(cells.find((c) => c.label === 'age: 18-34 × sex: female')!.target).toBe(52);
+    expect(cells.reduce((n, c) => n + c.target, 0)).toBe(200);
+    expect(cells.find((c) => c.label === 'age: 18-34 × sex: female')!.achieved).toBe(1);
+    expect((await lead.get(`${projectPath}/cells`)).body.cells).toEqual(before);
+    expect((await lead.get(`${projectPath}/targets`)).body).toEqual(targetsBefore);
+    const bad = await lead.post(`${projectPath}/targets/preview`, { variables: [{ name: 'age', categories: [{ label: 'x', share: -1 }] }] });
+    expect(bad.status).toBe(400);
+    const interviewer = await client(h, org, 'interviewer');
+    expect((await interviewer.post(`${projectPath}/targets/preview`, edited)).status).toBe(403);
+  });
+
   it('lets no interviewer or client change targets', async () => {
     for (const role of ['interviewer', 'client'] as const) {
       const c = await client(h, org, role);

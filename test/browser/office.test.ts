@@ -149,8 +149,13 @@ describe('lead sets up a project', () => {
     await page.getByLabel('Interlock sex').check();
     await screenshot(page, 'desktop-lead-targets-review');
     await page.getByRole('button', { name: 'Save targets' }).click();
+    const preview = page.getByRole('dialog', { name: 'Check the cell targets' });
+    await preview.getByRole('table', { name: 'New cell targets' }).getByText('age_band: 18-34 × sex: female').waitFor();
+    await screenshot(page, 'desktop-lead-cell-preview');
+    await preview.getByRole('button', { name: 'Save these targets' }).click();
+    await preview.waitFor({ state: 'hidden' });
 
-    const cells = page.getByRole('table', { name: 'Cell targets' });
+    const cells = page.getByRole('table', { name: 'Cell targets', exact: true });
     await cells.getByText('age_band: 18-34 × sex: female').waitFor();
     const targets = await cells.locator('tbody tr td:nth-of-type(2)').allTextContents();
     expect(targets).toHaveLength(8);

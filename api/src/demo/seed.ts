@@ -74,7 +74,7 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
   });
 
   const cells = new CellsService(db);
-  await new TargetsService(db, new CellAllocator(db)).save(project.id, {
+  await new TargetsService(db, new CellAllocator(db), cells).save(project.id, {
     variables: Object.entries(VELLMOOR_TARGETS).map(([name, shares]) => ({
       name: shownAs(name),
       interlocked: name === 'age_band' || name === 'sex',

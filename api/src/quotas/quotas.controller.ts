@@ -8,7 +8,7 @@ import { ProjectAccess } from '../projects/project-access.service.js';
 import { CellsService } from './cells.service.js';
 import { SaveTargetsDto } from './dto/targets.dto.js';
 import { TargetsService } from './targets.service.js';
-import { CellResponse, CellsResponse, QuotaBoardResponse } from './dto/cells-response.dto.js';
+import { CellResponse, CellsResponse, QuotaBoardResponse, TargetsPreviewResponse } from './dto/cells-response.dto.js';
 import { ParsedTargetsResponse, TargetsResponse } from './dto/targets-response.dto.js';
 
 export const TARGETS_FILE_LIMIT = 256 * 1024;
@@ -36,6 +36,16 @@ export class QuotasController {
   async saveTargets(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Body() dto: SaveTargetsDto) {
     await this.access.find(user, projectId);
     return this.targets.save(projectId, dto);
+  }
+
+  /** The cells these targets would give, with the interviews already logged in them; saves nothing. */
+  @Post('targets/preview')
+  @HttpCode(200)
+  @Roles('lead', 'admin')
+  @ApiOkResponse({ type: TargetsPreviewResponse })
+  async previewTargets(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Body() dto: SaveTargetsDto) {
+    await this.access.find(user, projectId);
+    return { cells: await this.targets.preview(projectId, dto) };
   }
 
   /** Reads an uploaded `variable,category,share` file and returns it for review; saves nothing. */

@@ -10,6 +10,7 @@ import { JOINT_SEPARATOR } from '../estimation/joint-names.js';
 import { resolveTargets } from '../estimation/joint-targets.js';
 import type { MarginTarget } from '../estimation/raking.js';
 import { CellAllocator, loadActiveTargets, loadJointTable, variableViews, type VariableView } from './cell-allocator.js';
+import { CellsService, type CellView } from './cells.service.js';
 import { SaveTargetsDto } from './dto/targets.dto.js';
 import { validateAs } from '../common/validation.js';
 import { atLine } from './targets-file-lines.js';
@@ -107,6 +108,7 @@ export class TargetsService {
   constructor(
     @Inject(KNEX) private readonly db: Knex,
     private readonly cells: CellAllocator,
+    private readonly counts: CellsService,
   ) {}
 
   async get(projectId: string): Promise<TargetsView> {
@@ -121,41 +123,63 @@ export class TargetsService {
   }
 
   async save(projectId: string, dto: SaveTargetsDto): Promise<TargetsView> {
+    await this.db.transaction((trx) => this.replace(trx, projectId, dto));
+    return this.get(projectId);
+  }
+
+  /**
+   * The cells these targets would give, with the interviews already logged counted in them,
+   * worked out by saving in a transaction that is then rolled back: the very rules saving
+   * applies, and nothing changes.
+   */
+  async preview(projectId: string, dto: SaveTargetsDto): Promise<CellView[]> {
+    let cells: CellView[] = [];
+    const undo = new Error('preview only');
+    try {
+      await this.db.transaction(async (trx) => {
+        await this.replace(trx, projectId, dto);
+        cells = await this.counts.cellCounts(projectId, trx);
+        throw undo;
+      });
+    } catch (error) {
+      if (error !== undo) throw error;
+    }
+    return cells;
+  }
+
+  private async replace(trx: Knex.Transaction, projectId: string, dto: SaveTargetsDto): Promise<void> {
     checkTargets(dto);
     const fromJoint = jointMargins(dto);
-    await this.db.transaction(async (trx) => {
-      // One writer per project at a time: syncs and target edits queue behind each other.
-      await trx('projects').where({ id: projectId }).forUpdate().first('id');
-      await trx('quota_variables').where({ project_id: projectId }).update({ retired: true });
-      await trx('quota_categories').where({ project_id: projectId }).update({ retired: true });
-      for (const [position, v] of dto.variables.entries()) {
-        const [variable] = await trx('quota_variables')
-          .insert({ project_id: projectId, name: v.name.trim(), position, interlocked: Boolean(v.interlocked), retired: false })
-          .onConflict(['project_id', 'name'])
-          .merge(['position', 'interlocked', 'retired'])
-          .returning('*');
-        // An interlocked variable with joint shares takes its margin from the table.
-        const joint = fromJoint?.get(v.name.trim());
-        const shareOf = (c: { label: string; share: number }) => joint?.get(c.label.trim()) ?? c.share;
-        const total = v.categories.reduce((s, c) => s + shareOf(c), 0);
-        await trx('quota_categories')
-          .insert(
-            v.categories.map((c, i) => ({
-              variable_id: variable!.id,
-              project_id: projectId,
-              label: c.label.trim(),
-              position: i,
-              share: shareOf(c) / total,
-              retired: false,
-            })),
-          )
-          .onConflict(['variable_id', 'label'])
-          .merge(['position', 'share', 'retired']);
-      }
-      await this.saveJointShares(trx, projectId, dto);
-      await this.cells.recompute(projectId, trx);
-    });
-    return this.get(projectId);
+    // One writer per project at a time: syncs and target edits queue behind each other.
+    await trx('projects').where({ id: projectId }).forUpdate().first('id');
+    await trx('quota_variables').where({ project_id: projectId }).update({ retired: true });
+    await trx('quota_categories').where({ project_id: projectId }).update({ retired: true });
+    for (const [position, v] of dto.variables.entries()) {
+      const [variable] = await trx('quota_variables')
+        .insert({ project_id: projectId, name: v.name.trim(), position, interlocked: Boolean(v.interlocked), retired: false })
+        .onConflict(['project_id', 'name'])
+        .merge(['position', 'interlocked', 'retired'])
+        .returning('*');
+      // An interlocked variable with joint shares takes its margin from the table.
+      const joint = fromJoint?.get(v.name.trim());
+      const shareOf = (c: { label: string; share: number }) => joint?.get(c.label.trim()) ?? c.share;
+      const total = v.categories.reduce((s, c) => s + shareOf(c), 0);
+      await trx('quota_categories')
+        .insert(
+          v.categories.map((c, i) => ({
+            variable_id: variable!.id,
+            project_id: projectId,
+            label: c.label.trim(),
+            position: i,
+            share: shareOf(c) / total,
+            retired: false,
+          })),
+        )
+        .onConflict(['variable_id', 'label'])
+        .merge(['position', 'share', 'retired']);
+    }
+    await this.saveJointShares(trx, projectId, dto);
+    await this.cells.recompute(projectId, trx);
   }
 
   private async saveJointShares(trx: Knex.Transaction, projectId: string, dto: SaveTargetsDto): Promise<void> {

@@ -353,6 +353,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/targets/preview": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["QuotasController_previewTargets"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/sign-up": {
         parameters: {
             query?: never;
@@ -946,6 +962,9 @@ export interface components {
              */
             share: number;
         };
+        TargetsPreviewResponse: {
+            cells: components["schemas"]["CellResponse"][];
+        };
         TargetsResponse: {
             /**
              * @description Where the interlocked cells' targets come from; null when nothing is interlocked
@@ -1079,6 +1098,7 @@ export type SignUpSettingsResponse = components['schemas']['SignUpSettingsRespon
 export type SyncBatchDto = components['schemas']['SyncBatchDto'];
 export type SyncReplyResponse = components['schemas']['SyncReplyResponse'];
 export type TargetCategoryDto = components['schemas']['TargetCategoryDto'];
+export type TargetsPreviewResponse = components['schemas']['TargetsPreviewResponse'];
 export type TargetsResponse = components['schemas']['TargetsResponse'];
 export type TargetVariableDto = components['schemas']['TargetVariableDto'];
 export type UpdateProjectDto = components['schemas']['UpdateProjectDto'];
@@ -1659,6 +1679,31 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ParsedTargetsResponse"];
+                };
+            };
+        };
+    };
+    QuotasController_previewTargets: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SaveTargetsDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TargetsPreviewResponse"];
                 };
             };
         };

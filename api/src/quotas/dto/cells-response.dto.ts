@@ -52,6 +52,12 @@ export class CellsResponse implements CellsView {
   refreshedAt: string;
 }
 
+/** The cells targets would give if saved, with the interviews already logged counted in them. */
+export class TargetsPreviewResponse {
+  @ApiProperty({ type: () => [CellResponse] })
+  cells: CellResponse[];
+}
+
 export class InterviewerProgressResponse implements InterviewerProgress {
   @ApiProperty({ format: 'uuid' })
   id: string;

@@ -47,16 +47,31 @@ export function draftFrom(targets: Targets): DraftVariable[] {
   });
 }
 
-/** Variables whose typed shares do not add up to 100 (half a point either way), with their totals. */
+/**
+ * Variables whose typed shares are on no plain scale, with their totals: not percentages
+ * (100, half a point either way), not proportions (1, within 0.005) and not plainly counts
+ * (whole numbers adding up to 1,000 or more, as census tables give them). Those on a plain
+ * scale are saved normalised without asking; the rest ask first.
+ */
 export function offTotals(variables: DraftVariable[]): { name: string; total: number }[] {
   return variables
-    .map((v) => ({ name: v.name.trim() || 'unnamed', total: shareTotal(v) }))
-    .filter(({ total }) => total > 0 && Math.abs(total - 100) > 0.5);
+    .map((v) => ({ v, name: v.name.trim() || 'unnamed', total: shareTotal(v) }))
+    .filter(({ v, total }) => total > 0 && !onPlainScale(v, total))
+    .map(({ name, total }) => ({ name, total }));
 }
 
+function onPlainScale(variable: DraftVariable, total: number): boolean {
+  if (Math.abs(total - 100) <= 0.5 || Math.abs(total - 1) <= 0.005) return true;
+  return total >= 1000 && variable.categories.every((c) => Number.isInteger(parseShare(c.share)));
+}
+
+/** A typed share: "30", "0.3", "30%" and the decimal comma "0,3". */
 export function parseShare(text: string): number | null {
-  const value = Number(text.trim().replace(',', '.'));
-  return text.trim() === '' || !Number.isFinite(value) ? null : value;
+  const typed = text.trim();
+  const percent = typed.endsWith('%');
+  const number = (percent ? typed.slice(0, -1).trim() : typed).replace(',', '.');
+  const value = Number(number);
+  return number === '' || !Number.isFinite(value) ? null : value;
 }
 
 export function shareTotal(variable: DraftVariable): number {

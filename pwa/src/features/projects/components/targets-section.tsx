@@ -3,6 +3,10 @@ import { QueryView } from '../../../components/query-view';
 import type { Project } from '../../../lib/projects/get-projects';
 import { useTargets, type Targets } from '../api/get-targets';
 import { useSaveTargets } from '../api/save-targets';
+import { usePreviewTargets } from '../api/preview-targets';
+import { useCells } from '../api/get-cells';
+import type { CellResponse } from '../../../lib/api-types';
+import { CellPreviewDialog } from './cell-preview-dialog';
 import { CellTargets } from './cell-targets';
 import { blankVariable, checkDraftTargets, draftFrom, offTotals, type DraftVariable } from './targets-draft';
 import { RemoveVariableDialog } from './remove-variable-dialog';
@@ -29,6 +33,9 @@ function heldJoint(targets: Targets, source: string): HeldJoint | null {
 
 function TargetsEditor({ project, saved }: { project: Project; saved: Targets }) {
   const save = useSaveTargets(project.id);
+  const preview = usePreviewTargets(project.id);
+  const current = useCells(project.id);
+  const [checking, setChecking] = useState<{ targets: Targets; cells: CellResponse[] } | null>(null);
   const [draft, setDraft] = useState<DraftVariable[]>(() => (saved.variables.length ? draftFrom(saved) : [blankVariable()]));
   const [fromFile, setFromFile] = useState<string | null>(null);
   const [problems, setProblems] = useState<string[]>([]);
@@ -41,6 +48,7 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
   const change = (next: DraftVariable[]) => {
     setDraft(next);
     setSavedNote(false);
+    preview.reset();
   };
   const submit = (scaleConfirmed = false) => {
     setScaling(null);
@@ -57,13 +65,18 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
       setScaling(off);
       return;
     }
-    save.mutate(joint ? { ...checked.targets, jointShares: joint.shares } : checked.targets, {
+    const targets = joint ? { ...checked.targets, jointShares: joint.shares } : checked.targets;
+    // Every cell target is shown before anything is saved.
+    preview.mutate(targets, { onSuccess: ({ cells }) => setChecking({ targets, cells }) });
+  };
+  const confirmSave = (targets: Targets) =>
+    save.mutate(targets, {
       onSuccess: () => {
+        setChecking(null);
         setFromFile(null);
         setSavedNote(true);
       },
     });
-  };
 
   return (
     <>
@@ -112,14 +125,14 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
           ? `Interlocked: ${interlocked.join(' × ')}; every other variable is a margin quota.`
           : 'No variables interlocked: every variable is a margin quota.'}
       </p>
-      {problems.length > 0 || save.error ? (
+      {problems.length > 0 || preview.error ? (
         <div className="pl-form-problem" role="alert">
           <p>Not saved:</p>
           <ul>
             {problems.map((problem) => (
               <li key={problem}>{problem}</li>
             ))}
-            {save.error ? <li>{save.error.message}</li> : null}
+            {preview.error ? <li>{preview.error.message}</li> : null}
           </ul>
         </div>
       ) : null}
@@ -127,8 +140,8 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
         <button type="button" className="pl-button pl-button-quiet" onClick={() => change([...draft, blankVariable()])}>
           Add a variable
         </button>
-        <button type="button" className="pl-button pl-button-main" onClick={() => submit()} disabled={save.isPending}>
-          {save.isPending ? 'Saving…' : 'Save targets'}
+        <button type="button" className="pl-button pl-button-main" onClick={() => submit()} disabled={preview.isPending || save.isPending}>
+          {preview.isPending ? 'Working out the cells…' : 'Save targets'}
         </button>
       </div>
       {removing ? (
@@ -139,6 +152,20 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
             setRemoving(null);
           }}
           onCancel={() => setRemoving(null)}
+        />
+      ) : null}
+      {checking ? (
+        <CellPreviewDialog
+          cells={checking.cells}
+          current={current.data?.cells ?? []}
+          sampleSize={project.targetSize}
+          busy={save.isPending}
+          problem={save.error?.message ?? null}
+          onConfirm={() => confirmSave(checking.targets)}
+          onCancel={() => {
+            setChecking(null);
+            save.reset();
+          }}
         />
       ) : null}
       {scaling ? <ScaleSharesDialog totals={scaling} onConfirm={() => submit(true)} onCancel={() => setScaling(null)} /> : null}

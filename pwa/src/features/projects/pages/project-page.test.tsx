@@ -28,7 +28,19 @@ function projectApi(status = 'setup'): FakeApi {
   api.on('GET', '/api/projects/p9/cells', () => json({ variables: [], cells: [], refreshedAt: '2026-12-02T10:00:00Z' }));
   api.on('GET', '/api/projects/p9/members', () => json([]));
   api.on('GET', '/api/users', () => json(people));
+  api.on('POST', '/api/projects/p9/targets/preview', () => json({ cells: previewCells }));
   return api;
+}
+
+const previewCells = [
+  { id: 'n1', kind: 'margin', label: 'age_band: 18-34', categoryIds: ['a1'], target: 120, achieved: 0, status: 'open' },
+  { id: 'n2', kind: 'margin', label: 'age_band: 35+', categoryIds: ['a2'], target: 280, achieved: 0, status: 'open' },
+];
+
+/** Saving shows every cell target first; this goes ahead from there. */
+async function confirmCells(user: ReturnType<typeof userEvent.setup>) {
+  const dialog = await screen.findByRole('dialog', { name: 'Check the cell targets' });
+  await user.click(within(dialog).getByRole('button', { name: 'Save these targets' }));
 }
 
 const csv = () => new File(['variable,category,share\nage_band,18-34,30\n'], 'targets.csv', { type: 'text/csv' });
@@ -92,6 +104,7 @@ describe('quota targets from a CSV file', () => {
     await user.click(screen.getByLabelText('Interlock sex'));
     expect(screen.getByText('Interlocked: age_band × sex; every other variable is a margin quota.')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Save targets' }));
+    await confirmCells(user);
 
     const cells = await screen.findByRole('table', { name: 'Cell targets' });
     expect(within(cells).getByRole('row', { name: /18-34 × sex: female/ })).toHaveTextContent('61');
@@ -143,6 +156,7 @@ describe('quota targets from a CSV file', () => {
     await user.click(screen.getByLabelText('Interlock age_band'));
     await user.click(screen.getByLabelText('Interlock sex'));
     await user.click(screen.getByRole('button', { name: 'Save targets' }));
+    await confirmCells(user);
     expect(await screen.findByText(/Targets saved/)).toBeInTheDocument();
     expect(api.calls.find((c) => c.method === 'PUT')?.body).toMatchObject({ jointShares });
   });
@@ -190,10 +204,85 @@ describe('one scale for shares', () => {
 
     await user.click(screen.getByRole('button', { name: 'Save targets' }));
     await user.click(within(screen.getByRole('dialog', { name: 'Shares do not add up to 100%' })).getByRole('button', { name: 'Save scaled to 100%' }));
+    await confirmCells(user);
     expect(await screen.findByText(/Targets saved/)).toBeInTheDocument();
     expect(api.calls.find((c) => c.method === 'PUT')?.body).toMatchObject({
       variables: [{ name: 'age_band', categories: [{ label: '18-34', share: 45 }, { label: '35+', share: 70 }] }],
     });
+  });
+});
+
+describe('every cell target before saving', () => {
+  it('shows each cell beside its target now and the interviews in it; Go back saves nothing', async () => {
+    const api = projectApi('fieldwork');
+    api.on('GET', '/api/projects/p9/targets', () =>
+      json({ variables: [{ id: 'v1', name: 'age_band', interlocked: false, categories: [{ id: 'a1', label: '18-34', share: 0.3 }, { id: 'a2', label: '35+', share: 0.7 }] }], jointShares: [], interlockBasis: null }),
+    );
+    api.on('GET', '/api/projects/p9/cells', () =>
+      json({ variables: [], refreshedAt: '2026-12-02T10:00:00Z', cells: [
+        { id: 'c1', kind: 'margin', label: 'age_band: 18-34', categoryIds: ['a1'], target: 120, achieved: 40, status: 'open' },
+        { id: 'c2', kind: 'margin', label: 'age_band: 35+', categoryIds: ['a2'], target: 280, achieved: 150, status: 'open' },
+      ] }),
+    );
+    api.on('POST', '/api/projects/p9/targets/preview', () =>
+      json({ cells: [
+        { id: 'c1', kind: 'margin', label: 'age_band: 18-34', categoryIds: ['a1'], target: 100, achieved: 40, status: 'open' },
+        { id: 'c2', kind: 'margin', label: 'age_band: 35+', categoryIds: ['a2'], target: 300, achieved: 150, status: 'open' },
+      ] }),
+    );
+    api.on('PUT', '/api/projects/p9/targets', ({ body }) => json(body));
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    const young = await screen.findByLabelText('age_band: share of 18-34');
+    await user.clear(young);
+    await user.type(young, '25');
+    const old = screen.getByLabelText('age_band: share of 35+');
+    await user.clear(old);
+    await user.type(old, '75');
+    await user.click(screen.getByRole('button', { name: 'Save targets' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Check the cell targets' });
+    expect(dialog).toHaveTextContent('2 cells sharing a sample of 400; 2 targets change.');
+    const table = within(dialog).getByRole('table', { name: 'New cell targets' });
+    expect(within(table).getByRole('row', { name: /18-34/ })).toHaveTextContent(/120\s*100\s*40/);
+    expect(within(table).getByRole('row', { name: /35\+/ })).toHaveTextContent(/280\s*300\s*150/);
+    expect(api.calls.find((c) => c.method === 'POST' && c.path.endsWith('/preview'))?.body).toMatchObject({
+      variables: [{ name: 'age_band', categories: [{ label: '18-34', share: 25 }, { label: '35+', share: 75 }] }],
+    });
+    await user.click(within(dialog).getByRole('button', { name: 'Go back' }));
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+    expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
+  });
+
+  it('takes proportions, 30% and census counts without asking; a slip between scales asks', async () => {
+    const api = projectApi();
+    api.on('PUT', '/api/projects/p9/targets', ({ body }) => json(body));
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    await user.type(await screen.findByPlaceholderText('e.g. age_band'), 'district');
+    await user.type(screen.getByLabelText('district: category 1'), 'Harbour');
+    await user.type(screen.getByLabelText('district: category 2'), 'Uplands');
+    const cases: [string, string, boolean][] = [
+      ['0.3', '0.7', false], // proportions
+      ['30%', '70%', false], // percentages with the sign
+      ['5400', '12600', false], // census counts
+      ['0.35', '70', true], // a proportion typed among percentages
+    ];
+    for (const [a, b, asks] of cases) {
+      await user.clear(screen.getByLabelText('district: share of Harbour'));
+      await user.type(screen.getByLabelText('district: share of Harbour'), a);
+      await user.clear(screen.getByLabelText('district: share of Uplands'));
+      await user.type(screen.getByLabelText('district: share of Uplands'), b);
+      await user.click(screen.getByRole('button', { name: 'Save targets' }));
+      const question = screen.queryByRole('dialog', { name: 'Shares do not add up to 100%' });
+      expect(question !== null, `${a} and ${b}`).toBe(asks);
+      if (question) await user.click(within(question).getByRole('button', { name: 'Go back' }));
+      else await user.click(within(await screen.findByRole('dialog', { name: 'Check the cell targets' })).getByRole('button', { name: 'Go back' }));
+    }
+    expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
   });
 });
 
