@@ -24,6 +24,8 @@ export interface MantelHaenszelResult {
   /** This interviewer's yes answers, and how many the others' rates within the same strata would give. */
   observedYes: number;
   expectedYes: number;
+  /** This interviewer's interviews in the strata used. */
+  interviews: number;
 }
 
 function checkCount(value: number, what: string): void {
@@ -40,6 +42,7 @@ export function mantelHaenszel(strata: StratumCounts[]): MantelHaenszelResult | 
   let expected = 0;
   let variance = 0;
   let used = 0;
+  let own = 0;
   strata.forEach((s, k) => {
     for (const key of ['thisYes', 'thisNo', 'otherYes', 'otherNo'] as const) checkCount(s[key], `stratum ${k + 1}: ${key}`);
   });
@@ -51,6 +54,7 @@ export function mantelHaenszel(strata: StratumCounts[]): MantelHaenszelResult | 
     const colYes = s.thisYes + s.otherYes;
     const colNo = s.thisNo + s.otherNo;
     used += 1;
+    own += rowThis;
     observed += s.thisYes;
     expected += (rowThis * colYes) / n;
     variance += (rowThis * rowOther * colYes * colNo) / (n * n * (n - 1));
@@ -64,6 +68,7 @@ export function mantelHaenszel(strata: StratumCounts[]): MantelHaenszelResult | 
     strataDropped: strata.length - used,
     observedYes: observed,
     expectedYes: expected,
+    interviews: own,
   };
 }
 
