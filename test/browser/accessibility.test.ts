@@ -60,6 +60,18 @@ describe('accessibility and width at 360×640', () => {
     const page = await asRole('interviewer@vellmoor.example', '/interviewer');
     const problems = await checkPages(page, ['/interviewer/outbox', '/interviewer/cells', '/interviewer']);
 
+    // Whatever the Tab key reaches shows the two-colour ring (theme.css, focus-contrast.test.ts).
+    for (let i = 0; i < 6; i++) {
+      await page.keyboard.press('Tab');
+      const ring = await page.evaluate(() => {
+        const element = document.activeElement as HTMLElement;
+        const style = getComputedStyle(element);
+        return { what: element.outerHTML.slice(0, 60), outline: `${style.outlineStyle} ${style.outlineWidth} ${style.outlineColor}`, shadow: style.boxShadow };
+      });
+      expect(ring.outline, ring.what).toBe('solid 3px rgb(20, 58, 62)');
+      expect(ring.shadow, ring.what).toContain('rgb(240, 194, 110)');
+    }
+
     await page.getByRole('button', { name: 'Log a contact for Vellmoor tram extension' }).click();
     await page.getByRole('heading', { name: 'What happened?' }).waitFor();
     problems.push(...(await checkPage(page, 'log a contact: outcome')));
