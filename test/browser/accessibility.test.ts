@@ -1,7 +1,7 @@
 // Every page of every role at phone size (360×640), checked with axe-core (no serious or
 // critical violation of its WCAG 2.x and best-practice rules) and for width (nothing wider
 // than the phone; tables scroll inside their own box). One browser per role, signed in once;
-// the problems of all pages are gathered and reported together.
+// the problems of all pages are gathered and reported together. Dialogs are checked open.
 import type { Page } from 'playwright-core';
 import { afterEach, describe, expect, inject, it } from 'vitest';
 import { openBrowser, PHONE, screenshot, signIn, type Browser } from './browser.js';
@@ -38,7 +38,7 @@ async function asRole(email: string, home: string): Promise<Page> {
 describe('accessibility and width at 360×640', () => {
   it('holds on the signed-out pages', async () => {
     browser = await openBrowser(PHONE);
-    const problems = await checkPages(browser.page, ['/sign-in', '/forgot-password', '/set-password?token=a.b']);
+    const problems = await checkPages(browser.page, ['/sign-in', '/forgot-password', '/sign-up', '/set-password?token=a.b']);
     expect(problems).toEqual([]);
   });
 
@@ -109,12 +109,17 @@ describe('accessibility and width at 360×640', () => {
     const problems = await checkPages(page, [
       '/lead',
       '/lead/projects/new',
-      `/lead/projects/${project}`,
       `/lead/projects/${project}/quota-board`,
       '/lead/balance',
       '/lead/benchmarks',
       '/lead/delivery',
+      `/lead/projects/${project}`,
     ]);
+    await page.getByRole('button', { name: 'Duplicate for a new wave' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Duplicate this project?' });
+    await dialog.waitFor();
+    problems.push(...(await checkPage(page, 'duplicate-project dialog')));
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
     expect(problems).toEqual([]);
   });
 
