@@ -70,6 +70,7 @@ describe('accessibility and width at 360×640', () => {
       });
       expect(ring.outline, ring.what).toBe('solid 3px rgb(20, 58, 62)');
       expect(ring.shadow, ring.what).toContain('rgb(240, 194, 110)');
+      await screenshot(page, `a11y-focus-${i}`);
     }
 
     await page.getByRole('button', { name: 'Log a contact for Vellmoor tram extension' }).click();
