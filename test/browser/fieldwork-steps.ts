@@ -53,7 +53,7 @@ export async function waitForServiceWorker(page: Page): Promise<void> {
 export async function logComplete(page: Page, categories: Record<string, string>, answer: 'Yes' | 'No', shotPrefix?: string) {
   await page.getByRole('button', { name: 'Log a contact for Vellmoor tram extension' }).click();
   if (shotPrefix) await screenshot(page, `${shotPrefix}-outcome`);
-  await page.getByRole('button', { name: 'Complete', exact: true }).click();
+  await page.getByRole('radio', { name: 'Complete', exact: true }).click();
   for (const [variable, category] of Object.entries(categories)) {
     await page.getByRole('radiogroup', { name: variable }).getByRole('radio', { name: category, exact: true }).click();
   }

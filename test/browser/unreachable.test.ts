@@ -75,7 +75,7 @@ describe('a contact half logged', () => {
 
     const { categories } = RESPONDENTS[3]!;
     await page.getByRole('button', { name: 'Log a contact for Vellmoor tram extension' }).click();
-    await page.getByRole('button', { name: 'Complete', exact: true }).click();
+    await page.getByRole('radio', { name: 'Complete', exact: true }).click();
     for (const [variable, category] of Object.entries(categories)) {
       await page.getByRole('radiogroup', { name: variable }).getByRole('radio', { name: category, exact: true }).click();
     }

@@ -10,7 +10,8 @@ export function SignedOutFrame({ title, lead, children, back = true }: { title: 
   return (
     <IonPage>
       <IonContent className="pl-content pl-sign-in">
-        <main className="pl-sign-in-column">
+        {/* Ionic gives ion-content the main landmark; a second main inside it would nest landmarks. */}
+        <div className="pl-sign-in-column">
           <div className="pl-sign-in-top">
             <PlumblineLogo size={44} withName />
             <OnlineIndicator />
@@ -23,7 +24,7 @@ export function SignedOutFrame({ title, lead, children, back = true }: { title: 
               <Link to="/sign-in">Back to sign-in</Link>
             </p>
           ) : null}
-        </main>
+        </div>
       </IonContent>
     </IonPage>
   );

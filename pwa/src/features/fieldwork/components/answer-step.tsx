@@ -1,3 +1,5 @@
+import { RadioGroup } from '../../../components/radio-group';
+
 interface AnswerStepProps {
   question: string;
   answer: boolean | undefined;
@@ -6,30 +8,22 @@ interface AnswerStepProps {
   saving: boolean;
 }
 
+const answers = [
+  { value: true, label: 'Yes', className: 'pl-answer' },
+  { value: false, label: 'No', className: 'pl-answer' },
+];
+
 /** Last step of a complete: the headline question, answered yes or no. */
 export function AnswerStep({ question, answer, onAnswer, onSave, saving }: AnswerStepProps) {
   return (
     <section aria-labelledby="pl-answer-title">
-      <h2 id="pl-answer-title" className="pl-step-title">
+      <h2 id="pl-answer-title" className="pl-step-title" tabIndex={-1}>
         The headline question
       </h2>
       <p className="pl-question" id="pl-question">
         {question}
       </p>
-      <div role="radiogroup" aria-labelledby="pl-question" className="pl-category-grid pl-answer-grid">
-        {[true, false].map((value) => (
-          <button
-            key={String(value)}
-            type="button"
-            role="radio"
-            aria-checked={answer === value}
-            className={`pl-category pl-answer ${answer === value ? 'is-selected' : ''}`}
-            onClick={() => onAnswer(value)}
-          >
-            {value ? 'Yes' : 'No'}
-          </button>
-        ))}
-      </div>
+      <RadioGroup labelledBy="pl-question" options={answers} value={answer} onChoose={onAnswer} className="pl-category-grid pl-answer-grid" />
       <div className="pl-step-actions">
         <button type="button" className="pl-button pl-button-main pl-button-wide" disabled={answer === undefined || saving} onClick={onSave}>
           Save interview

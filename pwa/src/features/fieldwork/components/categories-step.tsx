@@ -1,3 +1,4 @@
+import { RadioGroup } from '../../../components/radio-group';
 import type { QuotaVariable } from '../../../db/plumbline-db';
 import { variableWord } from '../../../lib/fieldwork-words';
 
@@ -13,7 +14,7 @@ export function CategoriesStep({ variables, chosen, onChange, onNext }: Categori
   const missing = variables.filter((v) => !chosen[v.id]).length;
   return (
     <section aria-labelledby="pl-categories-title">
-      <h2 id="pl-categories-title" className="pl-step-title">
+      <h2 id="pl-categories-title" className="pl-step-title" tabIndex={-1}>
         Who is the respondent?
       </h2>
       {variables.map((variable) => (
@@ -21,23 +22,13 @@ export function CategoriesStep({ variables, chosen, onChange, onNext }: Categori
           <h3 id={`pl-var-${variable.id}`} className="pl-variable-name">
             {variableWord(variable.name)}
           </h3>
-          <div role="radiogroup" aria-labelledby={`pl-var-${variable.id}`} className="pl-category-grid">
-            {variable.categories.map((category) => {
-              const selected = chosen[variable.id] === category.id;
-              return (
-                <button
-                  key={category.id}
-                  type="button"
-                  role="radio"
-                  aria-checked={selected}
-                  className={`pl-category ${selected ? 'is-selected' : ''}`}
-                  onClick={() => onChange(variable.id, category.id)}
-                >
-                  {category.label}
-                </button>
-              );
-            })}
-          </div>
+          <RadioGroup
+            labelledBy={`pl-var-${variable.id}`}
+            options={variable.categories.map((category) => ({ value: category.id, label: category.label }))}
+            value={chosen[variable.id]}
+            onChoose={(categoryId) => onChange(variable.id, categoryId)}
+            className="pl-category-grid"
+          />
         </div>
       ))}
       <div className="pl-step-actions">

@@ -20,7 +20,7 @@ export function CellCheckStep({ cells, syncedAt, onStart, onBack }: CellCheckSte
 
   return (
     <section aria-labelledby="pl-check-title">
-      <h2 id="pl-check-title" className="pl-step-title">
+      <h2 id="pl-check-title" className="pl-step-title" tabIndex={-1}>
         Their cells
       </h2>
       {cells.length === 0 ? (

@@ -24,7 +24,7 @@ async function startComplete(age: string, region: string) {
   renderApp('/interviewer');
   await user.click(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' }));
   expect(screen.getByText(/Record no names, addresses or phone numbers/)).toBeInTheDocument();
-  await user.click(screen.getByRole('button', { name: 'Complete' }));
+  await user.click(screen.getByRole('radio', { name: 'Complete' }));
   await user.click(within(screen.getByRole('radiogroup', { name: 'Age band' })).getByRole('radio', { name: age }));
   await user.click(within(screen.getByRole('radiogroup', { name: 'Region' })).getByRole('radio', { name: region }));
   await user.click(screen.getByRole('button', { name: 'Check their cells' }));
@@ -86,7 +86,7 @@ describe('logging a contact', () => {
     const user = userEvent.setup();
     renderApp('/interviewer');
     await user.click(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' }));
-    await user.click(screen.getByRole('button', { name: 'Refusal' }));
+    await user.click(screen.getByRole('radio', { name: 'Refusal' }));
     await user.click(screen.getByRole('button', { name: 'Save refusal' }));
 
     expect(await screen.findByText(/Refusal saved on this device/)).toBeInTheDocument();

@@ -15,6 +15,7 @@ import { CategoriesStep } from './categories-step';
 import { CellCheckStep } from './cell-check-step';
 import { OutcomeStep } from './outcome-step';
 import { FormProblem } from '../../../components/form-problem';
+import { stepAnnouncement } from './log-steps';
 
 interface LogContactProps {
   userId: string;
@@ -38,11 +39,21 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
   const variables = status?.variables ?? [];
   const top = useRef<HTMLDivElement>(null);
 
-  // Each step starts at the top of the screen, with the project name in view.
+  // Each step starts at the top of the screen, with the project name in view; after a step
+  // (not on opening) focus goes to the new step's heading and the live region names it, so
+  // keyboard and screen-reader users land where sighted users look (WCAG 2.2 SC 2.4.3, 4.1.3).
+  const [announcement, setAnnouncement] = useState('');
+  const shownStep = useRef<DraftStep>(undefined);
   useEffect(() => {
+    if (shownStep.current === step) return;
+    const opening = shownStep.current === undefined;
+    shownStep.current = step;
     const content = top.current?.closest('ion-content') as (HTMLElement & { scrollToTop?: (ms?: number) => Promise<void> }) | null;
     void content?.scrollToTop?.(0);
-  }, [step]);
+    if (opening) return;
+    top.current?.querySelector<HTMLElement>('h2[tabindex="-1"]')?.focus();
+    setAnnouncement(stepAnnouncement(step, disposition));
+  }, [step, disposition]);
 
   // Kept on the device after every step; nothing is written until the first choice.
   const started = useRef(draft !== undefined);
@@ -95,13 +106,16 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
       <p className="pl-muted pl-small pl-privacy">
         Record no names, addresses or phone numbers: only categories, the answer and times.
       </p>
+      <p className="pl-visually-hidden" role="status" aria-live="polite">
+        {announcement}
+      </p>
       <FormProblem message={problem} />
 
       {step === 'outcome' ? <OutcomeStep onChoose={choose} /> : null}
 
       {step === 'confirm' ? (
         <section aria-labelledby="pl-confirm-title">
-          <h2 id="pl-confirm-title" className="pl-step-title">
+          <h2 id="pl-confirm-title" className="pl-step-title" tabIndex={-1}>
             {dispositionWords[disposition]}
           </h2>
           <div className="pl-step-actions">

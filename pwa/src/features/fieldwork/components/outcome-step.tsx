@@ -1,29 +1,34 @@
+import { useState } from 'react';
+import { RadioGroup } from '../../../components/radio-group';
 import type { Disposition } from '../../../db/plumbline-db';
 import { dispositionHints, dispositionOrder, dispositionWords } from '../../../lib/fieldwork-words';
 
-/** Step 1: what happened at this contact. Six large buttons, reachable with one thumb. */
+const outcomes = dispositionOrder.map((disposition) => ({
+  value: disposition,
+  label: dispositionWords[disposition],
+  hint: dispositionHints[disposition],
+  className: disposition === 'complete' ? 'is-main' : '',
+}));
+
+/**
+ * Step 1: what happened at this contact. Six large options, reachable with one thumb: a tap
+ * (or Space or Enter) chooses one and moves on; the arrow keys only move between them.
+ */
 export function OutcomeStep({ onChoose }: { onChoose: (disposition: Disposition) => void }) {
+  const [browsing, setBrowsing] = useState<Disposition>();
   return (
     <section aria-labelledby="pl-outcome-title">
-      <h2 id="pl-outcome-title" className="pl-step-title">
+      <h2 id="pl-outcome-title" className="pl-step-title" tabIndex={-1}>
         What happened?
       </h2>
-      <div className="pl-choice-grid">
-        {dispositionOrder.map((disposition) => (
-          <button
-            key={disposition}
-            type="button"
-            className={`pl-choice ${disposition === 'complete' ? 'is-main' : ''}`}
-            aria-label={dispositionWords[disposition]}
-            onClick={() => onChoose(disposition)}
-          >
-            <span className="pl-choice-word">{dispositionWords[disposition]}</span>
-            <span className="pl-choice-hint" aria-hidden="true">
-              {dispositionHints[disposition]}
-            </span>
-          </button>
-        ))}
-      </div>
+      <RadioGroup
+        labelledBy="pl-outcome-title"
+        options={outcomes}
+        value={browsing}
+        optionClassName="pl-choice"
+        className="pl-choice-grid"
+        onChoose={(disposition, how) => (how === 'arrow' ? setBrowsing(disposition) : onChoose(disposition))}
+      />
     </section>
   );
 }

@@ -4,6 +4,8 @@ import '../fieldwork.css';
 import { PageFrame } from '../../../components/page-frame';
 import { EmptyPanel, LoadingPanel } from '../../../components/state-panels';
 import { formatMoment } from '../../../lib/format';
+import { syncNow } from '../../../sync/sync-scheduler';
+import { useSyncProgress } from '../../../sync/sync-progress';
 import { useBackgroundSync } from '../../../sync/use-background-sync';
 import { CellTable } from '../components/cell-table';
 import { useFieldStatus } from '../hooks/use-field-status';
@@ -11,6 +13,7 @@ import { useFieldStatus } from '../hooks/use-field-status';
 export function CellsPage() {
   useBackgroundSync();
   const field = useFieldStatus();
+  const progress = useSyncProgress();
 
   return (
     <PageFrame title="Cells" lead="Before you start, check that the respondent’s cells are still open.">
@@ -21,25 +24,33 @@ export function CellsPage() {
           <p>The cells of your projects appear here after this device’s first sync with the network.</p>
         </EmptyPanel>
       ) : (
-        field.projects.map((project) => {
-          const status = field.cells[project.id];
-          return (
-            <section key={project.id} className="pl-card pl-cells-card" aria-label={`Cells of ${project.name}`}>
-              <h2 className="pl-card-title">{project.name}</h2>
-              {status ? (
-                <>
-                  <p className="pl-muted pl-small">
-                    As of the sync {formatMoment(status.syncedAt)}, with your unsent completes counted.
-                  </p>
-                  <CellTable title="Crossed cells" cells={status.cells.filter((c) => c.kind === 'interlocked')} />
-                  <CellTable title="Single-variable cells" cells={status.cells.filter((c) => c.kind === 'margin')} />
-                </>
-              ) : (
-                <p className="pl-muted">Not synced on this device yet.</p>
-              )}
-            </section>
-          );
-        })
+        <>
+          {/* Fresh figures just before an interview; also a way into the page for the keyboard. */}
+          <p className="pl-cells-sync">
+            <button type="button" className="pl-button pl-button-quiet" onClick={() => void syncNow()}>
+              {progress.running ? 'Syncing…' : 'Sync now for the latest cells'}
+            </button>
+          </p>
+          {field.projects.map((project) => {
+            const status = field.cells[project.id];
+            return (
+              <section key={project.id} className="pl-card pl-cells-card" aria-label={`Cells of ${project.name}`}>
+                <h2 className="pl-card-title">{project.name}</h2>
+                {status ? (
+                  <>
+                    <p className="pl-muted pl-small">
+                      As of the sync {formatMoment(status.syncedAt)}, with your unsent completes counted.
+                    </p>
+                    <CellTable title="Crossed cells" cells={status.cells.filter((c) => c.kind === 'interlocked')} />
+                    <CellTable title="Single-variable cells" cells={status.cells.filter((c) => c.kind === 'margin')} />
+                  </>
+                ) : (
+                  <p className="pl-muted">Not synced on this device yet.</p>
+                )}
+              </section>
+            );
+          })}
+        </>
       )}
     </PageFrame>
   );
