@@ -121,6 +121,12 @@ describe('accessibility and width at 360×640', () => {
     await dialog.waitFor();
     problems.push(...(await checkPage(page, 'duplicate-project dialog')));
     await dialog.getByRole('button', { name: 'Cancel' }).click();
+    // Saving targets shows every cell target first (nothing is saved until confirmed).
+    await page.getByRole('button', { name: 'Save targets' }).click();
+    const preview = page.getByRole('dialog', { name: 'Check the cell targets' });
+    await preview.waitFor();
+    problems.push(...(await checkPage(page, 'cell-targets preview dialog')));
+    await preview.getByRole('button', { name: 'Go back' }).click();
     expect(problems).toEqual([]);
   });
 
