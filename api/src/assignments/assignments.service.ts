@@ -36,12 +36,13 @@ export class AssignmentsService {
   async set(user: AuthUser, projectId: string, userId: string, dto: SetAssignmentDto): Promise<Assignment> {
     await this.access.findEditable(user, projectId);
     await this.checkInterviewer(projectId, userId);
-    const cellIds = [...new Set((dto.cellIds ?? []).map((id) => id.toLowerCase()))];
-    if (cellIds.length) {
-      const found = new Set((await this.db('quota_cells').where({ project_id: projectId }).whereIn('id', cellIds).select('id')).map((r) => r.id));
-      const unknown = cellIds.find((id) => !found.has(id));
-      if (unknown) throw badRequest('cellIds', `${unknown} is not a quota cell of this project`);
-    }
+    const asked = [...new Set((dto.cellIds ?? []).map((id) => id.toLowerCase()))];
+    // Kept in the cells' own order, whatever the order sent.
+    const cellIds = asked.length
+      ? (await this.db('quota_cells').where({ project_id: projectId }).whereIn('id', asked).orderBy('position').select('id')).map((r) => r.id)
+      : [];
+    const unknown = asked.find((id) => !cellIds.includes(id));
+    if (unknown) throw badRequest('cellIds', `${unknown} is not a quota cell of this project`);
     await this.db('interviewer_assignments')
       .insert({ project_id: projectId, user_id: userId, target: dto.target, cell_ids: cellIds, updated_by: user.id, updated_at: this.db.fn.now() as unknown as Date })
       .onConflict(['project_id', 'user_id'])
