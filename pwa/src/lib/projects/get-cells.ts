@@ -1,7 +1,8 @@
 // GET /api/projects/:id/cells: the cell targets the server allocated from the quota targets.
+// Shared (lib): the set-up page and the assignment forms both list the cells.
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import type { CellResponse, CellsResponse } from '../../../lib/api-types';
+import { apiRequest } from '../api-client';
+import type { CellResponse, CellsResponse } from '../api-types';
 
 export type ProjectCell = CellResponse;
 export type ProjectCells = CellsResponse;
