@@ -6,6 +6,7 @@ import type { DestinationStream } from 'pino';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { AccountsModule } from './accounts/accounts.module.js';
+import { AssignmentsModule } from './assignments/assignments.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BalanceModule } from './balance/balance.module.js';
 import { AllExceptionsFilter } from './common/filters/http-exception.filter.js';
@@ -50,6 +51,7 @@ export class AppModule {
         UsersModule,
         ProjectsModule,
         QuotasModule,
+        AssignmentsModule,
         InterviewsModule,
         BalanceModule,
         JobsModule,

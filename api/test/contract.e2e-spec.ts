@@ -111,9 +111,24 @@ describe('answers match the OpenAPI document', () => {
     conforms(balance, 'get', '/api/projects/{projectId}/balance', 200);
     expect(balance.body.outcome.interval).toHaveLength(2);
   });
+
+  it('assignments, the interviewer\'s own progress, archive and restore', async () => {
+    const cells = (await lead.get(`${project()}/cells`)).body.cells as { id: string }[];
+    const path = `${project()}/assignments/${org.users.interviewer.id}`;
+    conforms(await supervisor.put(path, { target: 30, cellIds: [cells[0]!.id] }), 'put', '/api/projects/{projectId}/assignments/{userId}', 200);
+    conforms(await lead.get(`${project()}/assignments`), 'get', '/api/projects/{projectId}/assignments', 200);
+    conforms(await interviewer.get('/api/projects'), 'get', '/api/projects', 200);
+    const cleared = await h.http().delete(path).set({ Authorization: `Bearer ${lead.token}` });
+    expect(cleared.status).toBe(204);
+    expect(doc.paths['/api/projects/{projectId}/assignments/{userId}']?.delete?.responses['204']).toBeDefined();
+    await lead.patch(project(), { status: 'closed' });
+    conforms(await lead.post(`${project()}/archive`), 'post', '/api/projects/{id}/archive', 200);
+    conforms(await lead.get('/api/projects?archived=true'), 'get', '/api/projects', 200);
+    conforms(await lead.post(`${project()}/restore`), 'post', '/api/projects/{id}/restore', 200);
+  });
 });
 
 function sampleProject() {
-  return { id: randomUUID(), name: 'x', topic: '', fieldStart: null, fieldEnd: null, targetSize: 1, status: 'setup', headlineQuestion: 'q?', timeZone: 'UTC' };
+  return { id: randomUUID(), name: 'x', topic: '', fieldStart: null, fieldEnd: null, targetSize: 1, status: 'setup', headlineQuestion: 'q?', timeZone: 'UTC', archivedAt: null };
 }
 

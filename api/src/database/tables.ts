@@ -65,6 +65,8 @@ export interface ProjectRow {
   /** IANA time zone of the fieldwork: field days and "today" are counted in it. */
   time_zone: string;
   targets_updated_at: Date | null;
+  /** Set while the project is archived (only a closed project can be); cleared on restore. */
+  archived_at: Date | null;
   created_at: Date;
 }
 
@@ -142,6 +144,16 @@ export interface ProjectMemberRow {
   created_at: Date;
 }
 
+/** An interviewer's own goal on a project: completes to reach and, optionally, cells to work (empty: any). */
+export interface InterviewerAssignmentRow {
+  project_id: string;
+  user_id: string;
+  target: number;
+  cell_ids: string[];
+  updated_by: string | null;
+  updated_at: Date;
+}
+
 /** Failed sign-ins under one key (account, device or address); successes never count. */
 export interface SignInFailureRow {
   key: string;
@@ -199,6 +211,7 @@ declare module 'knex/types/tables.js' {
     one_time_tokens: OneTimeTokenRow;
     projects: ProjectRow;
     project_members: ProjectMemberRow;
+    interviewer_assignments: InterviewerAssignmentRow;
     sign_in_failures: SignInFailureRow;
     quota_variables: QuotaVariableRow;
     quota_categories: QuotaCategoryRow;

@@ -1,4 +1,4 @@
-import { ForbiddenException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, ForbiddenException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { AuthUser } from '../common/roles.js';
 import { KNEX } from '../database/database.constants.js';
@@ -34,6 +34,13 @@ export class ProjectAccess {
     return row;
   }
 
+  /** As `find`, for changing the project: an archived project is read-only until it is restored (409). */
+  async findEditable(user: AuthUser, projectId: string): Promise<ProjectRow> {
+    const row = await this.find(user, projectId);
+    assertNotArchived(row);
+    return row;
+  }
+
   /** For logging interviews: the project must exist in the organisation and be assigned to the interviewer. */
   async findForInterviewer(user: AuthUser, projectId: string): Promise<ProjectRow> {
     // One round trip: the project and whether this interviewer is on its team.
@@ -46,4 +53,10 @@ export class ProjectAccess {
     const { is_member: _member, ...project } = row;
     return project;
   }
+}
+
+export const ARCHIVED_MESSAGE = 'This project is archived and read-only: restore it (it goes back to closed) before changing it.';
+
+export function assertNotArchived(project: ProjectRow): void {
+  if (project.archived_at) throw new ConflictException(ARCHIVED_MESSAGE);
 }

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Put } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Put, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiCreatedResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
@@ -7,18 +7,24 @@ import { CreateProjectDto } from './dto/create-project.dto.js';
 import { SetMembersDto } from './dto/members.dto.js';
 import { UpdateProjectDto } from './dto/update-project.dto.js';
 import { ProjectsService } from './projects.service.js';
-import { ProjectMemberResponse, ProjectResponse } from './dto/project-response.dto.js';
+import { ProjectListItemResponse, ProjectMemberResponse, ProjectResponse } from './dto/project-response.dto.js';
+import { ListProjectsQuery } from './dto/list-projects.query.js';
+import { ProjectArchive } from './project-archive.service.js';
 
 @ApiTags('projects')
 @ApiBearerAuth()
 @Controller('projects')
 export class ProjectsController {
-  constructor(private readonly projects: ProjectsService) {}
+  constructor(
+    private readonly projects: ProjectsService,
+    private readonly archives: ProjectArchive,
+  ) {}
 
+  /** Projects not archived; `?archived=true` lists only the archived ones. */
   @Get()
-  @ApiOkResponse({ type: [ProjectResponse] })
-  list(@CurrentUser() user: AuthUser) {
-    return this.projects.list(user);
+  @ApiOkResponse({ type: [ProjectListItemResponse] })
+  list(@CurrentUser() user: AuthUser, @Query() query: ListProjectsQuery) {
+    return this.projects.list(user, query.archived === 'true');
   }
 
   @Post()
@@ -47,6 +53,24 @@ export class ProjectsController {
   @ApiCreatedResponse({ type: ProjectResponse })
   duplicate(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.projects.duplicate(user, id);
+  }
+
+  /** A closed project leaves everyday lists and devices, read-only until restored. */
+  @Post(':id/archive')
+  @HttpCode(200)
+  @Roles('lead', 'admin')
+  @ApiOkResponse({ type: ProjectResponse })
+  archive(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.archives.archive(user, id);
+  }
+
+  /** Back to the everyday lists, closed. */
+  @Post(':id/restore')
+  @HttpCode(200)
+  @Roles('lead', 'admin')
+  @ApiOkResponse({ type: ProjectResponse })
+  restore(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.archives.restore(user, id);
   }
 
   @Get(':id/members')

@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { CellAllocatorModule } from '../quotas/cell-allocator.js';
 import { ProjectAccess } from './project-access.service.js';
+import { ProjectArchive } from './project-archive.service.js';
 import { ProjectsController } from './projects.controller.js';
 import { ProjectsService } from './projects.service.js';
 import { TimeZones } from './time-zones.js';
@@ -8,7 +9,7 @@ import { TimeZones } from './time-zones.js';
 @Module({
   imports: [CellAllocatorModule],
   controllers: [ProjectsController],
-  providers: [ProjectsService, ProjectAccess, TimeZones],
+  providers: [ProjectsService, ProjectAccess, ProjectArchive, TimeZones],
   exports: [ProjectsService, ProjectAccess],
 })
 export class ProjectsModule {}

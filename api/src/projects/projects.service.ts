@@ -9,6 +9,7 @@ import type { UpdateProjectDto } from './dto/update-project.dto.js';
 import { CellAllocator } from '../quotas/cell-allocator.js';
 import { ProjectAccess } from './project-access.service.js';
 import { TimeZones } from './time-zones.js';
+import { ownProgress, type OwnProgress } from './own-progress.js';
 
 export interface ProjectSummary {
   id: string;
@@ -20,6 +21,13 @@ export interface ProjectSummary {
   status: ProjectRow['status'];
   headlineQuestion: string;
   timeZone: string;
+  /** When it was archived; null while it is not. */
+  archivedAt: string | null;
+}
+
+/** A project as GET /api/projects lists it: for an interviewer, with their own progress. */
+export interface ProjectListItem extends ProjectSummary {
+  mine: OwnProgress | null;
 }
 
 export interface ProjectMember {
@@ -40,6 +48,7 @@ export function projectSummary(row: ProjectRow): ProjectSummary {
     status: row.status,
     headlineQuestion: row.headline_question,
     timeZone: row.time_zone,
+    archivedAt: row.archived_at ? row.archived_at.toISOString() : null,
   };
 }
 
@@ -61,9 +70,15 @@ export class ProjectsService {
     private readonly zones: TimeZones,
   ) {}
 
-  async list(user: AuthUser): Promise<ProjectSummary[]> {
-    const rows = await this.access.visibleProjects(user).select('projects.*').orderBy('projects.created_at', 'desc');
-    return rows.map(projectSummary);
+  /** Archived projects are left out unless asked for, then they are all that is listed. */
+  async list(user: AuthUser, archived = false): Promise<ProjectListItem[]> {
+    const rows = await this.access
+      .visibleProjects(user)
+      .where((q) => (archived ? q.whereNotNull('projects.archived_at') : q.whereNull('projects.archived_at')))
+      .select('projects.*')
+      .orderBy('projects.created_at', 'desc');
+    const mine = user.role === 'interviewer' ? await ownProgress(this.db, user.id, rows.map((r) => r.id)) : new Map<string, OwnProgress>();
+    return rows.map((row) => ({ ...projectSummary(row), mine: mine.get(row.id) ?? null }));
   }
 
   async get(user: AuthUser, id: string): Promise<ProjectSummary> {
@@ -91,7 +106,7 @@ export class ProjectsService {
 
   /** A new target size recomputes the cell targets; a new time zone re-dates the field days. */
   async update(user: AuthUser, id: string, dto: UpdateProjectDto): Promise<ProjectSummary> {
-    const current = await this.access.find(user, id);
+    const current = await this.access.findEditable(user, id);
     checkDates(dto.fieldStart ?? current.field_start, dto.fieldEnd ?? current.field_end);
     await this.zones.check(dto.timeZone);
     const changes: Partial<ProjectRow> = {};
@@ -158,7 +173,7 @@ export class ProjectsService {
 
   /** Replaces the project's members; every id must be an active user of the organisation. */
   async setMembers(user: AuthUser, id: string, userIds: string[]): Promise<ProjectMember[]> {
-    await this.access.find(user, id);
+    await this.access.findEditable(user, id);
     const unique = [...new Set(userIds)];
     const found = await this.db('users')
       .where({ organisation_id: user.organisationId, active: true })

@@ -34,7 +34,7 @@ export class QuotasController {
   @Roles('lead', 'admin')
   @ApiOkResponse({ type: TargetsResponse })
   async saveTargets(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Body() dto: SaveTargetsDto) {
-    await this.access.find(user, projectId);
+    await this.access.findEditable(user, projectId);
     return this.targets.save(projectId, dto);
   }
 
@@ -87,7 +87,7 @@ export class QuotasController {
   @Roles('supervisor', 'lead')
   @ApiOkResponse({ type: CellResponse })
   async close(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Param('cellId', ParseUUIDPipe) cellId: string) {
-    await this.access.find(user, projectId);
+    await this.access.findEditable(user, projectId);
     return this.cells.setClosed(user, projectId, cellId, true);
   }
 
@@ -96,7 +96,7 @@ export class QuotasController {
   @Roles('supervisor', 'lead')
   @ApiOkResponse({ type: CellResponse })
   async reopen(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Param('cellId', ParseUUIDPipe) cellId: string) {
-    await this.access.find(user, projectId);
+    await this.access.findEditable(user, projectId);
     return this.cells.setClosed(user, projectId, cellId, false);
   }
 }

@@ -15,7 +15,7 @@
 import { Dexie, type EntityTable, type Table } from 'dexie';
 import type { UserProfileResponse } from '../lib/api-types';
 import type { CellStatus, QuotaCell, QuotaVariable } from '../lib/cells';
-import type { Project } from '../lib/projects/get-projects';
+import type { ProjectListItem } from '../lib/projects/get-projects';
 
 /** The signed-in person as the server gave them at sign-in. */
 export type SessionUser = UserProfileResponse;
@@ -77,8 +77,12 @@ export interface MetaEntry {
   value: unknown;
 }
 
-/** A project as GET /api/projects lists it, kept on the device for offline use. */
-export type FieldProject = Project;
+/**
+ * A project as GET /api/projects lists it, kept on the device for offline use, with the
+ * interviewer's own progress and assignment (`mine`) as of that sync; missing in copies
+ * saved by an older app until the next sync.
+ */
+export type FieldProject = Omit<ProjectListItem, 'mine'> & { mine?: ProjectListItem['mine'] };
 
 export interface CachedProject {
   userId: string;

@@ -161,6 +161,22 @@ export interface paths {
         patch: operations["ProjectsController_update"];
         trace?: never;
     };
+    "/api/projects/{id}/archive": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["ProjectsController_archive"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{id}/duplicate": {
         parameters: {
             query?: never;
@@ -188,6 +204,54 @@ export interface paths {
         put: operations["ProjectsController_setMembers"];
         post?: never;
         delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{id}/restore": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["ProjectsController_restore"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/assignments": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AssignmentsController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/assignments/{userId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["AssignmentsController_set"];
+        post?: never;
+        delete: operations["AssignmentsController_clear"];
         options?: never;
         head?: never;
         patch?: never;
@@ -532,6 +596,26 @@ export interface components {
             /** @enum {string} */
             status: "accepted";
         };
+        AssignmentResponse: {
+            /** @description Quota cells to work, in the cells’ order; empty: any cell */
+            cellIds: string[];
+            /** @description The interviewer’s counted completes on the project so far */
+            completes: number;
+            /** @example Ada Fenwick */
+            name: string;
+            /**
+             * @description Completes to reach
+             * @example 150
+             */
+            target: number;
+            /** Format: date-time */
+            updatedAt: string;
+            /**
+             * Format: uuid
+             * @description The interviewer
+             */
+            userId: string;
+        };
         BalanceMarginResponse: {
             /** @example 18-24 */
             category: string;
@@ -772,6 +856,31 @@ export interface components {
             /** @example Vellmoor Field Research */
             name: string;
         };
+        OwnAssignmentResponse: {
+            /** @description Quota cells to work; empty: any cell */
+            cellIds: string[];
+            /**
+             * @description Completes to reach
+             * @example 150
+             */
+            target: number;
+        };
+        OwnProgressResponse: {
+            /** @description Null when no assignment was given */
+            assignment: components["schemas"]["OwnAssignmentResponse"] | null;
+            /** @description Counted completes on the project so far */
+            completes: number;
+            /**
+             * Format: date
+             * @description The field day the today figures are for, in the project’s time zone
+             * @example 2026-11-20
+             */
+            fieldDay: string;
+            /** @description Counted completes on that day */
+            todayCompletes: number;
+            /** @description Contacts of any outcome logged on that day and received */
+            todayContacts: number;
+        };
         ParsedCategoryResponse: {
             /** @example 18-24 */
             label: string;
@@ -813,6 +922,41 @@ export interface components {
              */
             status: "invited" | "active" | "disabled";
         };
+        ProjectListItemResponse: {
+            /**
+             * Format: date-time
+             * @description When the project was archived; null while it is not
+             */
+            archivedAt: string | null;
+            /**
+             * Format: date
+             * @example 2026-12-06
+             */
+            fieldEnd: string | null;
+            /**
+             * Format: date
+             * @example 2026-11-16
+             */
+            fieldStart: string | null;
+            /** @example Do you support extending the tram line? */
+            headlineQuestion: string;
+            /** Format: uuid */
+            id: string;
+            /** @description The interviewer’s own figures; null for other roles */
+            mine: components["schemas"]["OwnProgressResponse"] | null;
+            /** @example Vellmoor tram extension */
+            name: string;
+            status: components["schemas"]["ProjectStatus"];
+            /** @example 1200 */
+            targetSize: number;
+            /**
+             * @description IANA time zone in which field days are counted
+             * @example Europe/London
+             */
+            timeZone: string;
+            /** @description Empty when not given */
+            topic: string;
+        };
         ProjectMemberResponse: {
             email: string;
             /** Format: uuid */
@@ -821,6 +965,11 @@ export interface components {
             role: components["schemas"]["Role"];
         };
         ProjectResponse: {
+            /**
+             * Format: date-time
+             * @description When the project was archived; null while it is not
+             */
+            archivedAt: string | null;
             /**
              * Format: date
              * @example 2026-12-06
@@ -913,6 +1062,15 @@ export interface components {
             /** @description One-time refresh token (id.secret); rotated on every use */
             refreshToken: string;
             user: components["schemas"]["UserProfileResponse"];
+        };
+        SetAssignmentDto: {
+            /** @description Quota cells to work (ids from the project’s cells); left out or empty: any cell */
+            cellIds?: string[];
+            /**
+             * @description Completes the interviewer is asked to reach on the project
+             * @example 150
+             */
+            target: number;
         };
         SetMembersDto: {
             /** @description Everyone assigned to the project: interviewers, supervisors, clients */
@@ -1050,6 +1208,7 @@ export interface components {
     pathItems: never;
 }
 export type AcceptedItemResponse = components['schemas']['AcceptedItemResponse'];
+export type AssignmentResponse = components['schemas']['AssignmentResponse'];
 export type BalanceMarginResponse = components['schemas']['BalanceMarginResponse'];
 export type BalanceOutcomeResponse = components['schemas']['BalanceOutcomeResponse'];
 export type BalanceResponse = components['schemas']['BalanceResponse'];
@@ -1073,11 +1232,14 @@ export type LinkTokenDto = components['schemas']['LinkTokenDto'];
 export type LoginDto = components['schemas']['LoginDto'];
 export type MessageResponse = components['schemas']['MessageResponse'];
 export type OrganisationRefResponse = components['schemas']['OrganisationRefResponse'];
+export type OwnAssignmentResponse = components['schemas']['OwnAssignmentResponse'];
+export type OwnProgressResponse = components['schemas']['OwnProgressResponse'];
 export type ParsedCategoryResponse = components['schemas']['ParsedCategoryResponse'];
 export type ParsedTargetsResponse = components['schemas']['ParsedTargetsResponse'];
 export type ParsedVariableResponse = components['schemas']['ParsedVariableResponse'];
 export type PasswordSetResponse = components['schemas']['PasswordSetResponse'];
 export type PersonResponse = components['schemas']['PersonResponse'];
+export type ProjectListItemResponse = components['schemas']['ProjectListItemResponse'];
 export type ProjectMemberResponse = components['schemas']['ProjectMemberResponse'];
 export type ProjectResponse = components['schemas']['ProjectResponse'];
 export type ProjectStatus = components['schemas']['ProjectStatus'];
@@ -1090,6 +1252,7 @@ export type RequestResetDto = components['schemas']['RequestResetDto'];
 export type Role = components['schemas']['Role'];
 export type SaveTargetsDto = components['schemas']['SaveTargetsDto'];
 export type SessionResponse = components['schemas']['SessionResponse'];
+export type SetAssignmentDto = components['schemas']['SetAssignmentDto'];
 export type SetMembersDto = components['schemas']['SetMembersDto'];
 export type SetPasswordDto = components['schemas']['SetPasswordDto'];
 export type SignUpDto = components['schemas']['SignUpDto'];
@@ -1288,7 +1451,10 @@ export interface operations {
     };
     ProjectsController_list: {
         parameters: {
-            query?: never;
+            query?: {
+                /** @description true: only archived projects; otherwise none of them */
+                archived?: "true" | "false";
+            };
             header?: never;
             path?: never;
             cookie?: never;
@@ -1300,7 +1466,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": components["schemas"]["ProjectResponse"][];
+                    "application/json": components["schemas"]["ProjectListItemResponse"][];
                 };
             };
         };
@@ -1363,6 +1529,27 @@ export interface operations {
                 "application/json": components["schemas"]["UpdateProjectDto"];
             };
         };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProjectResponse"];
+                };
+            };
+        };
+    };
+    ProjectsController_archive: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
         responses: {
             200: {
                 headers: {
@@ -1438,6 +1625,95 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["ProjectMemberResponse"][];
                 };
+            };
+        };
+    };
+    ProjectsController_restore: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProjectResponse"];
+                };
+            };
+        };
+    };
+    AssignmentsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AssignmentResponse"][];
+                };
+            };
+        };
+    };
+    AssignmentsController_set: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+                userId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SetAssignmentDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AssignmentResponse"];
+                };
+            };
+        };
+    };
+    AssignmentsController_clear: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+                userId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The assignment is cleared */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };

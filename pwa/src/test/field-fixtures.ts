@@ -11,6 +11,7 @@ export const tramProject: FieldProject = {
   status: 'fieldwork',
   headlineQuestion: 'Do you support extending the tram line?',
   timeZone: 'Europe/London',
+  archivedAt: null,
 };
 
 export const tramVariables: QuotaVariable[] = [

@@ -11,6 +11,7 @@ import { respondentCells } from '../../../sync/cell-status';
 import { logContact } from '../../../sync/log-contact';
 import type { ProjectCellStatus } from '../hooks/use-field-status';
 import { AnswerStep } from './answer-step';
+import { AssignedCellsNote } from './assigned-cells-note';
 import { CategoriesStep } from './categories-step';
 import { CellCheckStep } from './cell-check-step';
 import { OutcomeStep } from './outcome-step';
@@ -150,6 +151,7 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
         />
       ) : null}
 
+      {step === 'check' ? <AssignedCellsNote project={project} theirCells={theirCells} /> : null}
       {step === 'check' ? (
         <CellCheckStep
           cells={theirCells}

@@ -87,6 +87,7 @@ export function TodayPage() {
                   key={p.id}
                   project={p}
                   status={field.cells[p.id]}
+                  entries={field.entries}
                   onLog={() => {
                     setSaved(undefined);
                     setLogging(p.id);

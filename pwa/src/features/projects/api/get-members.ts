@@ -1,23 +1,2 @@
-// GET /api/projects/:id/members: who is assigned to the project.
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api-client';
-import type { ProjectMemberResponse } from '../../../lib/api-types';
-
-export type Member = ProjectMemberResponse;
-
-export const memberKeys = {
-  all: ['members'] as const,
-  project: (projectId: string) => [...memberKeys.all, projectId] as const,
-};
-
-export function getMembers(projectId: string, signal?: AbortSignal): Promise<Member[]> {
-  return apiRequest<Member[]>(`/projects/${projectId}/members`, { signal });
-}
-
-export function membersQueryOptions(projectId: string) {
-  return queryOptions({ queryKey: memberKeys.project(projectId), queryFn: ({ signal }) => getMembers(projectId, signal) });
-}
-
-export function useMembers(projectId: string) {
-  return useQuery(membersQueryOptions(projectId));
-}
+// The project's members now live in lib (the supervisor's interviewers page reads them too).
+export { getMembers, memberKeys, membersQueryOptions, useMembers, type Member } from '../../../lib/projects/get-members';

@@ -11,9 +11,9 @@ const statusWords: Record<string, string> = {
   delivered: 'Delivered',
 };
 
-export function ProjectList({ projects }: { projects: Project[] }) {
+export function ProjectList({ projects, label = 'Projects' }: { projects: Project[]; label?: string }) {
   return (
-    <ul className="pl-card-list" aria-label="Projects">
+    <ul className="pl-card-list" aria-label={label}>
       {projects.map((project) => (
         <li key={project.id} className="pl-card">
           <div className="pl-card-head">
@@ -22,7 +22,7 @@ export function ProjectList({ projects }: { projects: Project[] }) {
                 {project.name}
               </Link>
             </h2>
-            <span className="pl-tag">{statusWords[project.status] ?? project.status}</span>
+            <span className="pl-tag">{project.archivedAt ? 'Archived' : (statusWords[project.status] ?? project.status)}</span>
           </div>
           <p className="pl-card-text">{project.topic}</p>
           <dl className="pl-facts">

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { ConfirmDialog } from '../../../components/confirm-dialog';
 import type { Project } from '../../../lib/projects/get-projects';
 import { useUpdateProject, type ProjectStatus } from '../api/update-project';
+import { ArchiveControl } from './archive-control';
 
 export const statusWords: Record<string, string> = {
   setup: 'Being set up',
@@ -66,9 +67,10 @@ export function StatusControl({ project }: { project: Project }) {
     <div className="pl-status-control">
       <p>
         Now: <strong>{statusWords[project.status] ?? project.status}</strong>
+        {project.archivedAt ? <strong>, archived</strong> : null}
       </p>
       <div className="pl-form-actions">
-        {moves[current].map((move) => (
+        {(project.archivedAt ? [] : moves[current]).map((move) => (
           <button
             key={move.to}
             type="button"
@@ -79,6 +81,7 @@ export function StatusControl({ project }: { project: Project }) {
             {move.label}
           </button>
         ))}
+        <ArchiveControl project={project} />
       </div>
       {asking ? (
         <ConfirmDialog

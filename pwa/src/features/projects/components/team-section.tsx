@@ -5,6 +5,7 @@ import { useUsers, type OrganisationUser } from '../../../lib/users/get-users';
 import { useMembers, type Member } from '../api/get-members';
 import { useSetMembers } from '../api/set-members';
 import { FormProblem } from '../../../components/form-problem';
+import { AssignmentsPanel } from '../../../components/assignments/assignments-panel';
 
 const groups: { role: Role; title: string }[] = [
   { role: 'interviewer', title: 'Interviewers' },
@@ -12,15 +13,22 @@ const groups: { role: Role; title: string }[] = [
   { role: 'client', title: 'Clients' },
 ];
 
-/** Who works on (or may read) the project: a checklist of the agency's people by role. */
-export function TeamSection({ projectId }: { projectId: string }) {
+/** Who works on (or may read) the project: a checklist of the agency's people by role, then each interviewer's assignment. */
+export function TeamSection({ projectId, readOnly = false }: { projectId: string; readOnly?: boolean }) {
   const users = useUsers();
   const members = useMembers(projectId);
   return (
     <QueryView query={users} what="people" offlineNote="The team needs the network." isEmpty={() => false} empty={null}>
       {(people) => (
         <QueryView query={members} what="the team" offlineNote="The team needs the network." isEmpty={() => false} empty={null}>
-          {(current) => <TeamChecklist projectId={projectId} people={people} members={current} />}
+          {(current) => (
+            <>
+              <TeamChecklist projectId={projectId} people={people} members={current} />
+              <h3 className="pl-subsection-title">Assignments</h3>
+              <p className="pl-small pl-muted">Optional: completes each interviewer should reach and, if you like, the cells they should work. Their Today page shows how they stand.</p>
+              <AssignmentsPanel projectId={projectId} interviewers={current.filter((m) => m.role === 'interviewer')} readOnly={readOnly} />
+            </>
+          )}
         </QueryView>
       )}
     </QueryView>

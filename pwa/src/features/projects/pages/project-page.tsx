@@ -24,6 +24,11 @@ export function ProjectPage() {
         {(p) => (
           <>
             {p.topic ? <p className="pl-page-lead">{p.topic}</p> : null}
+            {p.archivedAt ? (
+              <p className="pl-form-note" role="status">
+                This project is archived: hidden from lists and interviewers’ phones, and kept read-only. Restore it under Stage to change anything.
+              </p>
+            ) : null}
             <section className="pl-section" aria-labelledby="pl-details-heading">
               <h2 id="pl-details-heading" className="pl-section-title">Details</h2>
               <ProjectDetails project={p} />
@@ -46,7 +51,7 @@ export function ProjectPage() {
             </section>
             <section className="pl-section" aria-labelledby="pl-team-heading">
               <h2 id="pl-team-heading" className="pl-section-title">Team</h2>
-              <TeamSection projectId={p.id} />
+              <TeamSection projectId={p.id} readOnly={p.archivedAt !== null} />
             </section>
           </>
         )}

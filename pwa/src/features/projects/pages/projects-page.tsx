@@ -1,9 +1,10 @@
 import '../components/project-setup.css';
+import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { PageFrame } from '../../../components/page-frame';
 import { QueryView } from '../../../components/query-view';
 import { EmptyPanel } from '../../../components/state-panels';
-import { useProjects } from '../../../lib/projects/get-projects';
+import { useArchivedProjects, useProjects } from '../../../lib/projects/get-projects';
 import { ProjectList } from '../components/project-list';
 
 export function ProjectsPage() {
@@ -28,6 +29,34 @@ export function ProjectsPage() {
       >
         {(list) => <ProjectList projects={list} />}
       </QueryView>
+      <ArchivedProjects />
     </PageFrame>
+  );
+}
+
+/** Archived projects stay out of the list above; shown here on request, to open and restore. */
+function ArchivedProjects() {
+  const [shown, setShown] = useState(false);
+  const archived = useArchivedProjects(shown);
+  return (
+    <section className="pl-section" aria-labelledby="pl-archived-heading">
+      <h2 id="pl-archived-heading" className="pl-section-title">
+        Archived
+      </h2>
+      <button type="button" className="pl-button pl-button-quiet pl-button-small" aria-expanded={shown} onClick={() => setShown(!shown)}>
+        {shown ? 'Hide archived projects' : 'Show archived projects'}
+      </button>
+      {shown ? (
+        <QueryView
+          query={archived}
+          what="archived projects"
+          offlineNote="Archived projects need the network."
+          isEmpty={(list) => list.length === 0}
+          empty={<p className="pl-muted">No archived projects. A closed project can be archived from its page.</p>}
+        >
+          {(list) => <ProjectList projects={list} label="Archived projects" />}
+        </QueryView>
+      ) : null}
+    </section>
   );
 }
