@@ -11,9 +11,13 @@ export interface NormalDistribution {
   inv(p: number, mean: number, sd: number): number;
   cdf(x: number, mean: number, sd: number): number;
 }
+export interface StudentTDistribution {
+  inv(p: number, dof: number): number;
+}
 export interface JStatStatic {
   beta: BetaDistribution;
   normal: NormalDistribution;
+  studentt: StudentTDistribution;
   gammaln(x: number): number;
   betaln(a: number, b: number): number;
   ibeta(x: number, a: number, b: number): number;

@@ -31,13 +31,17 @@ export interface StoredSession {
 
 export type Disposition = 'complete' | 'partial' | 'refusal' | 'non_contact' | 'other' | 'not_eligible';
 
+/** Answers to the headline question; the headline share is over yes and no. */
+export type HeadlineAnswer = 'yes' | 'no' | 'dont_know' | 'no_answer';
+
 /** One contact exactly as the sync API takes it: categories, answer and paradata only. */
 export interface InterviewRecord {
   id: string;
   disposition: Disposition;
   /** Quota variable id → category id (every variable for a complete). */
   categories?: Record<string, string>;
-  headlineAnswer?: boolean;
+  /** true and false are what an older app stored; the server reads them as yes and no. */
+  headlineAnswer?: HeadlineAnswer | boolean;
   startedAt: string;
   endedAt: string;
 }
@@ -66,7 +70,8 @@ export interface ContactDraft {
   step: DraftStep;
   disposition: Disposition;
   categories: Record<string, string>;
-  headlineAnswer?: boolean;
+  /** true and false are what an older app stored (yes and no). */
+  headlineAnswer?: HeadlineAnswer | boolean;
   /** When the contact was started (becomes the interview's startedAt). */
   startedAt: string;
   updatedAt: string;

@@ -1,12 +1,15 @@
+import type { HeadlineAnswer } from '../../../db/plumbline-db';
+import { headlineAnswerOrder, headlineAnswerWords } from '../../../lib/fieldwork-words';
+
 interface AnswerStepProps {
   question: string;
-  answer: boolean | undefined;
-  onAnswer: (answer: boolean) => void;
+  answer: HeadlineAnswer | undefined;
+  onAnswer: (answer: HeadlineAnswer) => void;
   onSave: () => void;
   saving: boolean;
 }
 
-/** Last step of a complete: the headline question, answered yes or no. */
+/** Last step of a complete: the headline question, answered yes, no, don't know or no answer. */
 export function AnswerStep({ question, answer, onAnswer, onSave, saving }: AnswerStepProps) {
   return (
     <section aria-labelledby="pl-answer-title">
@@ -17,16 +20,16 @@ export function AnswerStep({ question, answer, onAnswer, onSave, saving }: Answe
         {question}
       </p>
       <div role="radiogroup" aria-labelledby="pl-question" className="pl-category-grid pl-answer-grid">
-        {[true, false].map((value) => (
+        {headlineAnswerOrder.map((value) => (
           <button
-            key={String(value)}
+            key={value}
             type="button"
             role="radio"
             aria-checked={answer === value}
             className={`pl-category pl-answer ${answer === value ? 'is-selected' : ''}`}
             onClick={() => onAnswer(value)}
           >
-            {value ? 'Yes' : 'No'}
+            {headlineAnswerWords[value]}
           </button>
         ))}
       </div>

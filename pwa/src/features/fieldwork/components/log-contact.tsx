@@ -5,8 +5,8 @@
 // draft on the device (db/draft-store), so a reload or crash resumes where it stopped.
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { discardDraft, saveDraft } from '../../../db/draft-store';
-import type { ContactDraft, Disposition, DraftStep, FieldProject } from '../../../db/plumbline-db';
-import { dispositionWords } from '../../../lib/fieldwork-words';
+import type { ContactDraft, Disposition, DraftStep, FieldProject, HeadlineAnswer } from '../../../db/plumbline-db';
+import { dispositionWords, headlineAnswerOf } from '../../../lib/fieldwork-words';
 import { respondentCells } from '../../../sync/cell-status';
 import { logContact } from '../../../sync/log-contact';
 import type { ProjectCellStatus } from '../hooks/use-field-status';
@@ -32,7 +32,7 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
   const [step, setStep] = useState<DraftStep>(draft?.step ?? 'outcome');
   const [disposition, setDisposition] = useState<Disposition>(draft?.disposition ?? 'complete');
   const [categories, setCategories] = useState<Record<string, string>>(draft?.categories ?? {});
-  const [answer, setAnswer] = useState<boolean | undefined>(draft?.headlineAnswer);
+  const [answer, setAnswer] = useState<HeadlineAnswer | undefined>(headlineAnswerOf(draft?.headlineAnswer));
   const [saving, setSaving] = useState(false);
   const [problem, setProblem] = useState<string>();
   const variables = status?.variables ?? [];
