@@ -11,6 +11,9 @@
 //                 every step, so a reload, a crash or a closed tab returns to the same step
 //                 with the same answers. Saving the contact moves it to the outbox and
 //                 deletes the draft in one transaction.
+//   sent          (v4) contacts the server acknowledged in the last two weeks, so the
+//                 interviewer can still void one logged by mistake (a void goes through the
+//                 outbox like any contact: a VoidRecord).
 // Everything here works offline; nothing here is ever sent except by the sync module.
 import { Dexie, type EntityTable, type Table } from 'dexie';
 import type { UserProfileResponse } from '../lib/api-types';
@@ -44,6 +47,29 @@ export interface InterviewRecord {
   headlineAnswer?: HeadlineAnswer | boolean;
   startedAt: string;
   endedAt: string;
+}
+
+/** A request to void a contact the server already has, sent through the outbox like a contact. */
+export interface VoidRecord {
+  kind: 'void';
+  /** The voided contact's UUID. */
+  id: string;
+  reason: string;
+}
+
+export function isVoidRecord(payload: unknown): payload is VoidRecord {
+  return typeof payload === 'object' && payload !== null && (payload as { kind?: unknown }).kind === 'void';
+}
+
+/** A contact the server acknowledged, kept a while so it can still be voided. */
+export interface SentEntry {
+  clientId: string;
+  interviewerId: string;
+  projectId: string;
+  sentAt: string;
+  record: InterviewRecord;
+  /** Set once the interviewer voided it (the void itself waits in the outbox until sent). */
+  voidReason?: string;
 }
 
 export interface OutboxEntry {
@@ -111,6 +137,7 @@ export class PlumblineDb extends Dexie {
   projectCache!: Table<CachedProject, [string, string]>;
   cellCache!: EntityTable<CachedCells, 'projectId'>;
   drafts!: EntityTable<ContactDraft, 'interviewerId'>;
+  sent!: EntityTable<SentEntry, 'clientId'>;
 
   constructor() {
     super('plumbline');
@@ -129,6 +156,8 @@ export class PlumblineDb extends Dexie {
     });
     // v3 adds drafts of contacts being logged.
     this.version(3).stores({ drafts: 'interviewerId' });
+    // v4 keeps acknowledged contacts for a while, so they can be voided.
+    this.version(4).stores({ sent: 'clientId, interviewerId, sentAt' });
   }
 }
 

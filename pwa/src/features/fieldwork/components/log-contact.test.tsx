@@ -97,6 +97,25 @@ describe('logging a contact', () => {
     expect(Object.keys(entry!.payload as object).sort()).toEqual(['disposition', 'endedAt', 'id', 'startedAt']);
     expect(entry!.interviewerId).toBe(me);
   });
+
+  it('records the categories seen at a partial, if the interviewer gives any, and no answer', async () => {
+    await syncedBefore(me);
+    const user = userEvent.setup();
+    renderApp('/interviewer');
+    await user.click(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' }));
+    await user.click(screen.getByRole('button', { name: 'Partial' }));
+    expect(screen.getByRole('group', { name: 'What could you see? (optional)' })).toBeInTheDocument();
+    await user.click(within(screen.getByRole('radiogroup', { name: 'Age band' })).getByRole('radio', { name: '35+' }));
+    // Tapping a chosen category again clears it: the interviewer was not sure after all.
+    await user.click(within(screen.getByRole('radiogroup', { name: 'Region' })).getByRole('radio', { name: 'Mardon' }));
+    await user.click(within(screen.getByRole('radiogroup', { name: 'Region' })).getByRole('radio', { name: 'Mardon' }));
+    await user.click(screen.getByRole('button', { name: 'Save partial' }));
+
+    expect(await screen.findByText(/Partial saved on this device/)).toBeInTheDocument();
+    const [entry] = await db.outbox.toArray();
+    expect(entry!.payload).toMatchObject({ disposition: 'partial', categories: { 'v-age': 'c-old' } });
+    expect(Object.keys(entry!.payload as object).sort()).toEqual(['categories', 'disposition', 'endedAt', 'id', 'startedAt']);
+  });
 });
 
 describe('a contact left half logged', () => {

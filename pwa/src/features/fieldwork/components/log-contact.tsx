@@ -13,8 +13,12 @@ import type { ProjectCellStatus } from '../hooks/use-field-status';
 import { AnswerStep } from './answer-step';
 import { CategoriesStep } from './categories-step';
 import { CellCheckStep } from './cell-check-step';
+import { ObservedCategories } from './observed-categories';
 import { OutcomeStep } from './outcome-step';
 import { FormProblem } from '../../../components/form-problem';
+
+/** Outcomes where the interviewer met someone and may record the categories they could see. */
+const OBSERVABLE = new Set<Disposition>(['partial', 'refusal']);
 
 interface LogContactProps {
   userId: string;
@@ -71,6 +75,7 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
         disposition: chosen,
         startedAt,
         ...(chosen === 'complete' ? { categories, headlineAnswer: answer } : {}),
+        ...(OBSERVABLE.has(chosen) && Object.keys(categories).length > 0 ? { categories } : {}),
       });
       onSaved(`${dispositionWords[chosen]} saved on this device.`, startedAt);
     } catch (error) {
@@ -104,6 +109,15 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
           <h2 id="pl-confirm-title" className="pl-step-title">
             {dispositionWords[disposition]}
           </h2>
+          {OBSERVABLE.has(disposition) && variables.length > 0 ? (
+            <ObservedCategories
+              variables={variables}
+              chosen={categories}
+              onChange={(variableId, categoryId) =>
+                setCategories(({ [variableId]: _old, ...rest }) => (categoryId ? { ...rest, [variableId]: categoryId } : rest))
+              }
+            />
+          ) : null}
           <div className="pl-step-actions">
             <button type="button" className="pl-button pl-button-main pl-button-wide" disabled={saving} onClick={() => void save(disposition)}>
               Save {dispositionWords[disposition].toLowerCase()}
