@@ -52,6 +52,10 @@ describe('voiding an interview already sent', () => {
     expect(row!.flags).toContain('voided');
     const flags = (await lead.get(`${base}/interviews/flags`)).body;
     expect(flags.byReason).toContainEqual({ code: 'voided', reason: expect.stringMatching(/^Voided after it was sent/), count: 1 });
+    expect(flags.voided).toEqual([{
+      id: batch[0]!.id, disposition: 'complete', fieldDay: '2026-11-20', interviewer: expect.stringMatching(/^interviewer /),
+      voidedBy: expect.stringMatching(/^interviewer /), voidedAt: row!.voided_at!.toISOString(), reason: 'Logged twice by mistake',
+    }]);
     // The export lists counted interviews only.
     expect((await lead.get(`${base}/interviews/export.csv`)).text).not.toContain(batch[0]!.id);
   });

@@ -698,6 +698,8 @@ export interface components {
             byReason: components["schemas"]["FlagCountResponse"][];
             /** @description Interviews with at least one flag; one interview may carry several */
             total: number;
+            /** @description The latest 50 voided interviews, newest first, with why */
+            voided: components["schemas"]["VoidedInterviewResponse"][];
         };
         HealthResponse: {
             /** @enum {string} */
@@ -1052,6 +1054,25 @@ export interface components {
              */
             status: "invited" | "active" | "disabled";
         };
+        VoidedInterviewResponse: {
+            /** @example complete */
+            disposition: string;
+            /**
+             * @description Field day of the interview (YYYY-MM-DD)
+             * @example 2026-11-20
+             */
+            fieldDay: string;
+            /** Format: uuid */
+            id: string;
+            /** @description Name of the interviewer who logged it */
+            interviewer: string;
+            /** @example Logged twice by mistake */
+            reason: string;
+            /** Format: date-time */
+            voidedAt: string;
+            /** @description Name of whoever voided it (the interviewer or a supervisor) */
+            voidedBy: string;
+        };
         VoidedItemResponse: {
             /**
              * Format: uuid
@@ -1149,6 +1170,7 @@ export type TargetVariableDto = components['schemas']['TargetVariableDto'];
 export type UpdateProjectDto = components['schemas']['UpdateProjectDto'];
 export type UserProfileResponse = components['schemas']['UserProfileResponse'];
 export type UserResponse = components['schemas']['UserResponse'];
+export type VoidedInterviewResponse = components['schemas']['VoidedInterviewResponse'];
 export type VoidedItemResponse = components['schemas']['VoidedItemResponse'];
 export type VoidInterviewDto = components['schemas']['VoidInterviewDto'];
 export type VoidResultResponse = components['schemas']['VoidResultResponse'];
