@@ -960,7 +960,7 @@ export interface components {
             enabled: boolean;
         };
         SyncBatchDto: {
-            /** @description Up to 1000 interviews */
+            /** @description Up to 1000 items: new interviews (InterviewItemDto), or voids of interviews already sent ({ kind: "void", id, reason }: VoidItemDto) */
             interviews: Record<string, never>[];
         };
         SyncReplyResponse: {

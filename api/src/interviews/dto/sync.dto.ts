@@ -6,7 +6,11 @@ export const SYNC_BATCH_LIMIT = 1000;
 
 /** The whole batch is checked only for its shape; each interview is checked on its own. */
 export class SyncBatchDto {
-  @ApiProperty({ type: 'array', items: { type: 'object' }, description: `Up to ${SYNC_BATCH_LIMIT} interviews` })
+  @ApiProperty({
+    type: 'array',
+    items: { type: 'object' },
+    description: `Up to ${SYNC_BATCH_LIMIT} items: new interviews (InterviewItemDto), or voids of interviews already sent ({ kind: "void", id, reason }: VoidItemDto)`,
+  })
   @IsArray({ message: 'interviews must be a list' })
   @ArrayMaxSize(SYNC_BATCH_LIMIT, { message: `interviews may hold at most ${SYNC_BATCH_LIMIT} items per batch` })
   interviews: unknown[];
