@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { Dialog } from '../../../components/dialog';
-import { changeWaitingAnswer, voidWaiting } from '../../../db/outbox-store';
 import { isVoidRecord, type HeadlineAnswer, type InterviewRecord, type OutboxEntry } from '../../../db/plumbline-db';
 import { dispositionWord, headlineAnswerOf, headlineAnswerOrder, headlineAnswerWords } from '../../../lib/fieldwork-words';
 import { formatMoment } from '../../../lib/format';
+import { changeUnsentAnswer, voidUnsentContact } from '../../../sync/void-contact';
 
 interface EntryListProps {
   entries: OutboxEntry[];
@@ -40,7 +40,7 @@ export function EntryList({ entries, projectNames, userId }: EntryListProps) {
                   Answer{' '}
                   <select
                     value={answer}
-                    onChange={(event) => void changeWaitingAnswer(entry.clientId, userId, event.target.value as HeadlineAnswer)}
+                    onChange={(event) => void changeUnsentAnswer(entry.clientId, userId, event.target.value as HeadlineAnswer)}
                   >
                     {headlineAnswerOrder.map((a) => (
                       <option key={a} value={a}>
@@ -64,7 +64,7 @@ export function EntryList({ entries, projectNames, userId }: EntryListProps) {
             <button type="button" className="pl-button pl-button-main" onClick={() => setVoiding(null)} autoFocus>
               Keep it
             </button>
-            <button type="button" className="pl-button pl-button-quiet" onClick={() => void voidWaiting(voiding.clientId, userId).then(() => setVoiding(null))}>
+            <button type="button" className="pl-button pl-button-quiet" onClick={() => void voidUnsentContact(voiding.clientId, userId).then(() => setVoiding(null))}>
               Void it
             </button>
           </div>
