@@ -99,7 +99,7 @@ async function main(): Promise<void> {
       const r = drawRespondent(random);
       const categories = Object.fromEntries(variables.map((v) => [v.id, categoryId(v.name, r.categories[v.name] as string)]));
       const startedAt = new Date(Date.parse(endedAt) - 15 * 60_000).toISOString();
-      return { id: randomUUID(), disposition: 'complete', categories, headlineAnswer: r.supports, startedAt, endedAt };
+      return { id: randomUUID(), disposition: 'complete', categories, headlineAnswer: (r.supports ? 'yes' : 'no') as 'yes' | 'no', startedAt, endedAt };
     };
     const paths = { sync: `/api/projects/${project!.id}/interviews/sync`, balance: `/api/projects/${project!.id}/balance`, board: `/api/projects/${project!.id}/quota-board`, project: `/api/projects/${project!.id}` };
 

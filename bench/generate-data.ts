@@ -55,7 +55,7 @@ export function contactRows(count: number, random: () => number, plan: ContactPl
       interviewer_id: plan.interviewerIds[Math.floor(random() * plan.interviewerIds.length)] as string,
       disposition,
       category_ids: complete ? Object.entries(r.categories).map(([v, label]) => plan.categoryId(v, label)) : [],
-      headline_answer: complete ? r.supports : null,
+      headline_answer: complete ? ((r.supports ? 'yes' : 'no') as 'yes' | 'no') : null,
       started_at: new Date(`${day}T10:00:00Z`),
       ended_at: new Date(`${day}T10:15:00Z`),
       field_day: day,

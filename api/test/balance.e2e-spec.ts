@@ -40,7 +40,9 @@ async function logInterviews(count: number, seed: number) {
     const categories: Record<string, string> = {};
     for (const v of targets.variables) categories[v.id] = v.categories.find((c) => c.label === r.categories[v.name])!.id;
     const at = new Date(Date.UTC(2026, 10, 16 + (i % 10), 10)).toISOString();
-    return { id: randomUUID(), disposition: 'complete', categories, headlineAnswer: r.supports, startedAt: at, endedAt: at };
+    // Every 7th says don't know and every 23rd gives no answer: raked, but outside the share.
+    const headlineAnswer = i % 7 === 3 ? 'dont_know' : i % 23 === 5 ? 'no_answer' : r.supports ? 'yes' : 'no';
+    return { id: randomUUID(), disposition: 'complete', categories, headlineAnswer, startedAt: at, endedAt: at };
   });
   const res = await interviewer.post(`${base}/interviews/sync`, { interviews: batch });
   expect(res.body.accepted).toBe(count);
@@ -83,6 +85,15 @@ describe('live balance', () => {
     expect(balance.outcome.interval[0]).toBeCloseTo(cli.outcome.interval[0], 9);
     expect(balance.outcome.interval[1]).toBeCloseTo(cli.outcome.interval[1], 9);
     expect(balance.outcome.method).toBe(cli.outcome.method);
+    // The share is over those who answered yes or no; the other answers are reported beside it.
+    const headlineAt = exported.text.split('\n')[0]!.split(',').indexOf('headline');
+    const answers: string[] = exported.text.trim().split('\n').slice(1).map((l: string) => l.split(',')[headlineAt] ?? '');
+    expect(balance.outcome.answered).toBe(answers.filter((a) => a === 'yes' || a === 'no').length);
+    expect(balance.outcome.answered).toBeLessThan(400);
+    expect(balance.outcome.unweighted).toBeCloseTo(answers.filter((a) => a === 'yes').length / balance.outcome.answered, 12);
+    balance.outcome.otherAnswers.forEach((o: { weighted: number }, i: number) => expect(o.weighted).toBeCloseTo(cli.outcome.otherAnswers[i].weighted, 9));
+    expect(balance.outcome.otherAnswers.map((o: { answer: string; count: number }) => [o.answer, o.count]))
+      .toEqual([['dont_know', answers.filter((a) => a === 'dont_know').length], ['no_answer', answers.filter((a) => a === 'no_answer').length]]);
     expect(balance.outcome.marginOfError).toBeCloseTo(1.96 * balance.outcome.standardError, 12);
     // The bias factor is defined as odds(u) / (odds(u) + odds(w)) (docs/methods.md, section 6).
     const odds = (p: number) => p / (1 - p);

@@ -1,11 +1,14 @@
 // The count tables kept by triggers on interviews must always equal a direct GROUP BY over
 // the interviews, whatever mix of inserts, review decisions, re-dating, other updates and
 // deletes came before. The rule for "counted" is written out here on purpose: completes
-// not rejected on review (the product design, section 2 and 3).
+// neither rejected on review nor voided (the product design, sections 2 and 3; issue 10);
+// a voided contact leaves the contact counts too. The code's counted() must agree with the
+// generated column on every row.
 import fc from 'fast-check';
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createOrg, startApp, type Harness, type TestOrg } from './harness.js';
+import { counted } from '../src/interviews/counted.js';
 
 const TABLES = {
   interview_counts: ['project_id', 'category_ids'],
@@ -35,7 +38,7 @@ const interview = fc.record({
   disposition: fc.constantFrom('complete', 'complete', 'partial', 'refusal', 'non_contact'),
   cats: fc.subarray([0, 1, 2, 3], { minLength: 1, maxLength: 2 }),
   day: fc.nat(2),
-  yes: fc.boolean(),
+  answer: fc.constantFrom('yes', 'no', 'dont_know', 'no_answer'),
   over: fc.boolean(),
   review: fc.constantFrom('pending', 'approved', 'rejected'),
 });
@@ -47,6 +50,7 @@ const operation = fc.oneof(
   fc.record({ kind: fc.constant('redate' as const), some, by: fc.integer({ min: -2, max: 2 }) }),
   fc.record({ kind: fc.constant('answer' as const), some }),
   fc.record({ kind: fc.constant('untouched' as const), some }),
+  fc.record({ kind: fc.constant('void' as const), some, undo: fc.boolean() }),
   fc.record({ kind: fc.constant('delete' as const), some }),
 );
 
@@ -70,7 +74,7 @@ async function run(ops: Operation[]) {
           interviewer_id: people[r.person]!,
           disposition: r.disposition as 'complete',
           category_ids: r.disposition === 'complete' ? r.cats.map((c) => categories[c]!) : r.cats.slice(1).map((c) => categories[c]!),
-          headline_answer: r.disposition === 'complete' ? r.yes : null,
+          headline_answer: r.disposition === 'complete' ? (r.answer as 'yes') : null,
           started_at: new Date('2026-11-20T10:00:00Z'),
           ended_at: new Date('2026-11-20T10:10:00Z'),
           field_day: `2026-11-2${r.day}`,
@@ -84,8 +88,15 @@ async function run(ops: Operation[]) {
     const rows = h.db('interviews').whereIn('id', ids);
     if (op.kind === 'review') await rows.update({ review_status: op.to as 'pending' });
     if (op.kind === 'redate') await rows.update({ field_day: h.db.raw('field_day + ?::int', [op.by]) as unknown as string });
-    if (op.kind === 'answer') await rows.update({ headline_answer: h.db.raw("CASE WHEN disposition = 'complete' THEN NOT headline_answer END") as unknown as boolean, over_quota: h.db.raw('NOT over_quota') as unknown as boolean });
+    if (op.kind === 'answer') {
+      // Each answer moves on to the next of the four: yes → no → don't know → no answer → yes.
+      const next = `CASE headline_answer WHEN 'yes' THEN 'no' WHEN 'no' THEN 'dont_know' WHEN 'dont_know' THEN 'no_answer' WHEN 'no_answer' THEN 'yes' END`;
+      await rows.update({ headline_answer: h.db.raw(next) as unknown as 'yes', over_quota: h.db.raw('NOT over_quota') as unknown as boolean });
+    }
     if (op.kind === 'untouched') await rows.update({ received_at: h.db.fn.now() });
+    if (op.kind === 'void') {
+      await rows.update(op.undo ? { voided_at: null, voided_by: null, void_reason: null } : { voided_at: new Date(), voided_by: people[0]!, void_reason: 'mistake' });
+    }
     if (op.kind === 'delete') await rows.delete();
   }
 }
@@ -93,17 +104,22 @@ async function run(ops: Operation[]) {
 async function compare() {
   for (const [table, keys] of Object.entries(TABLES)) {
     const k = keys.join(', ');
-    const kept = await h.db.raw(`SELECT ${k}, contacts, n, yes, over_quota FROM ${table} WHERE project_id = ANY(?) ORDER BY ${k}`, [projects]);
+    const kept = await h.db.raw(`SELECT ${k}, contacts, n, yes, dont_know, no_answer, over_quota FROM ${table} WHERE project_id = ANY(?) ORDER BY ${k}`, [projects]);
     const direct = await h.db.raw(
-      `SELECT ${k}, count(*)::int AS contacts,
-              count(*) FILTER (WHERE disposition = 'complete' AND review_status <> 'rejected')::int AS n,
-              count(*) FILTER (WHERE disposition = 'complete' AND review_status <> 'rejected' AND headline_answer)::int AS yes,
-              count(*) FILTER (WHERE disposition = 'complete' AND review_status <> 'rejected' AND over_quota)::int AS over_quota
-         FROM interviews WHERE project_id = ANY(?) GROUP BY ${k} ORDER BY ${k}`,
+      `WITH i AS (SELECT *, disposition = 'complete' AND review_status <> 'rejected' AND voided_at IS NULL AS is_counted FROM interviews)
+       SELECT ${k}, count(*) FILTER (WHERE voided_at IS NULL)::int AS contacts,
+              count(*) FILTER (WHERE is_counted)::int AS n,
+              count(*) FILTER (WHERE is_counted AND headline_answer = 'yes')::int AS yes,
+              count(*) FILTER (WHERE is_counted AND headline_answer = 'dont_know')::int AS dont_know,
+              count(*) FILTER (WHERE is_counted AND headline_answer = 'no_answer')::int AS no_answer,
+              count(*) FILTER (WHERE is_counted AND over_quota)::int AS over_quota
+         FROM i WHERE project_id = ANY(?) GROUP BY ${k} HAVING count(*) FILTER (WHERE voided_at IS NULL) > 0 ORDER BY ${k}`,
       [projects],
     );
     expect({ table, rows: kept.rows }).toEqual({ table, rows: direct.rows });
   }
+  const rows = await h.db('interviews').whereIn('project_id', projects).select('disposition', 'review_status', 'voided_at', 'counted');
+  for (const row of rows) expect(counted(row)).toBe(row.counted);
 }
 
 describe('count tables', () => {

@@ -28,7 +28,7 @@ describe('interviews the project did not expect', () => {
     expect(res.body.results.map((r: { status: string; flags: string[] }) => [r.status, r.flags])).toEqual([
       ['accepted', []], ['accepted', []], ['accepted', []],
     ]);
-    expect((await (await client(h, org, 'supervisor')).get(`/api/projects/${org.projectId}/interviews/flags`)).body).toEqual({ total: 0, byReason: [] });
+    expect((await (await client(h, org, 'supervisor')).get(`/api/projects/${org.projectId}/interviews/flags`)).body).toEqual({ total: 0, byReason: [], voided: [] });
   });
 
   it('accepts an interview that ended more than a day outside the field dates, flagged with the reason', async () => {
@@ -59,6 +59,7 @@ describe('interviews the project did not expect', () => {
         { code: 'project_closed', reason: 'Sent after the project was closed', count: 2 },
         { code: 'outside_field_dates', reason: 'Ended more than a day outside the field dates', count: 3 },
       ],
+      voided: [],
     });
 
     const lines = (await lead.get(`/api/projects/${org.projectId}/interviews/export.csv`)).text.trim().split('\n');

@@ -20,6 +20,19 @@ afterAll(() => h.close());
 const someone = () => pick(targets, { age: '35-59', sex: 'male', region: 'South' });
 
 describe('interview sync', () => {
+  it('stores the categories seen at a partial or refusal, which count as contacts but never as completes', async () => {
+    const seen = pick(targets, { age: '60+', sex: 'female' });
+    const partial = { ...complete(seen), disposition: 'partial', headlineAnswer: undefined };
+    const refusal = { ...complete(pick(targets, { region: 'Coast' })), disposition: 'refusal', headlineAnswer: undefined };
+    const reply = await interviewer.post(syncPath, { interviews: [partial, refusal] });
+    expect(reply.body).toMatchObject({ accepted: 2, rejected: 0 });
+    const rows = await h.db('interviews').whereIn('id', [partial.id, refusal.id]).orderBy('disposition').select('disposition', 'category_ids', 'counted');
+    expect(rows.map((r) => [r.disposition, r.category_ids.sort(), r.counted])).toEqual([
+      ['partial', Object.values(seen).sort(), false],
+      ['refusal', Object.values(pick(targets, { region: 'Coast' })), false],
+    ]);
+  });
+
   it('accepts a batch once; the same batch again is all duplicates and adds no rows', async () => {
     const batch = Array.from({ length: 5 }, () => complete(someone()));
     const first = await interviewer.post(syncPath, { interviews: batch });

@@ -65,7 +65,7 @@ export async function logComplete(page: Page, categories: Record<string, string>
 }
 
 export async function answerAndSave(page: Page, answer: 'Yes' | 'No', shotPrefix?: string) {
-  await page.getByRole('radio', { name: answer }).click();
+  await page.getByRole('radio', { name: answer, exact: true }).click();
   if (shotPrefix) await screenshot(page, `${shotPrefix}-answer`);
   await page.getByRole('button', { name: 'Save interview' }).click();
   await page.getByText('Complete saved on this device.').waitFor();

@@ -91,7 +91,7 @@ describe('a contact half logged', () => {
 
     await page.getByRole('button', { name: 'Check their cells' }).click();
     await page.getByRole('button', { name: 'Start the interview' }).click();
-    await page.getByRole('radio', { name: 'No' }).click();
+    await page.getByRole('radio', { name: 'No', exact: true }).click();
     await page.reload();
     const no = page.getByRole('radio', { name: /^(✓ )?No$/ });
     await no.waitFor();

@@ -34,7 +34,8 @@ export interface Balance {
   weightMax: number | null;
   maxMarginError: number | null;
   margins: BalanceMargin[];
-  outcome: (Partial<OutcomeSummary> & { column: string; unweighted: number }) | null;
+  /** The headline share over those who answered yes or no; null before anyone did. */
+  outcome: (Partial<OutcomeSummary> & { column: string; unweighted: number; answered: number }) | null;
   /** Why no weights could be computed yet, in words for the lead; null when they were. */
   weightingProblem: string | null;
   /** Figures not given because they cannot be trusted, each with its reason (docs/methods.md, section 4). */
@@ -51,7 +52,7 @@ export class BalanceService {
     const groups = await this.db('interview_counts')
       .where({ project_id: project.id })
       .where('n', '>', 0)
-      .select('category_ids', 'n', 'yes');
+      .select('category_ids', 'n', 'yes', 'dont_know', 'no_answer');
 
     const labelOf = new Map<string, { variable: string; label: string }>();
     for (const v of variables) for (const c of v.categories) labelOf.set(c.id, { variable: v.name, label: c.label });
@@ -64,7 +65,7 @@ export class BalanceService {
         if (known) categories[known.variable] = known.label;
       }
       if (Object.keys(categories).length < variables.length) excluded += g.n;
-      else cells.push({ categories, count: g.n, successes: g.yes });
+      else cells.push({ categories, count: g.n, successes: g.yes, answered: g.n - g.dont_know - g.no_answer, dontKnow: g.dont_know });
     }
     const targets: MarginTarget[] = variables.map((v) => ({
       variable: v.name,
@@ -72,6 +73,8 @@ export class BalanceService {
     }));
     const n = cells.reduce((s, c) => s + c.count, 0);
     const yes = cells.reduce((s, c) => s + c.successes, 0);
+    // The headline share is over those who answered yes or no (docs/methods.md, section 2).
+    const answered = cells.reduce((s, c) => s + (c.answered ?? c.count), 0);
     const unweighted = (variable: string, label: string) =>
       n === 0 ? 0 : cells.reduce((s, c) => s + (c.categories[variable] === label ? c.count : 0), 0) / n;
 
@@ -90,7 +93,7 @@ export class BalanceService {
       margins: targets.flatMap((t) =>
         t.shares.map((s) => ({ variable: t.variable, category: s.category, target: s.share, unweighted: unweighted(t.variable, s.category), weighted: null })),
       ),
-      outcome: n > 0 ? { column: 'headline', unweighted: yes / n } : null,
+      outcome: answered > 0 ? { column: 'headline', unweighted: yes / answered, answered } : null,
       weightingProblem: null,
       withheld: [],
       computedAt: new Date().toISOString(),

@@ -44,7 +44,7 @@ describe('plumbline weight', () => {
     expect(report.converged).toBe(true);
     expect(report.n).toBe(5);
     expect(report.maxMarginError).toBeLessThanOrEqual(1e-6);
-    expect(Object.keys(report.outcome)).toEqual(['column', 'unweighted', 'weighted', 'standardError', 'interval', 'method', 'marginOfError',
+    expect(Object.keys(report.outcome)).toEqual(['column', 'unweighted', 'weighted', 'answered', 'otherAnswers', 'standardError', 'interval', 'method', 'marginOfError',
       'impliedBiasFactor', 'impliedBiasFactorInterval', 'impliedBiasFactorMethod']);
     // Five interviews: the share's uncertainty is withheld, with its reasons (docs/methods.md, section 4).
     expect(report.outcome).toMatchObject({ standardError: null, interval: null, marginOfError: null, impliedBiasFactorInterval: null });
@@ -121,8 +121,24 @@ describe('plumbline weight', () => {
     expectRejected(weigh('id,age,region\n', TARGETS), 'data.csv', 'no rows');
   });
 
-  it('rejects an outcome column that is not 0/1', () => {
-    expectRejected(weigh(DATA.replace('5,old,Mardon,0', '5,old,Mardon,yes'), TARGETS, '--outcome', 'supports'), 'data.csv', 'line 6', 'supports', '"yes"');
+  it('reads yes, no, don\'t know and no answer: every interview is raked, the share is over yes and no', () => {
+    const words = DATA.replace('1,young,Harrowby,1', '1,young,Harrowby,yes').replace('2,old,Harrowby,0', '2,old,Harrowby,dont_know')
+      .replace('4,young,Mardon,0', '4,young,Mardon,No_Answer');
+    const result = weigh(words, TARGETS, '--outcome', 'supports');
+    expect(result.code).toBe(0);
+    const report = JSON.parse(result.stdout);
+    expect(report.n).toBe(5);
+    // Answered: interviews 1 (yes), 3 (yes) and 5 (no).
+    expect(report.outcome.answered).toBe(3);
+    expect(report.outcome.unweighted).toBeCloseTo(2 / 3, 12);
+    expect(report.outcome.otherAnswers.map((o: { answer: string; count: number }) => [o.answer, o.count])).toEqual([['dont_know', 1], ['no_answer', 1]]);
+    const weights = readFileSync(path('out.csv'), 'utf8').trim().split('\n').slice(1).map((r) => Number(r.split(',')[4]));
+    expect(report.outcome.weighted).toBeCloseTo((weights[0]! + weights[2]!) / (weights[0]! + weights[2]! + weights[4]!), 12);
+  });
+
+  it('rejects an outcome value it cannot read, naming the values it takes', () => {
+    expectRejected(weigh(DATA.replace('5,old,Mardon,0', '5,old,Mardon,maybe'), TARGETS, '--outcome', 'supports'), 'data.csv', 'line 6', 'supports', '"maybe"',
+      '1 or yes, 0 or no, dont_know or no_answer');
     expectRejected(weigh(DATA, TARGETS, '--outcome', 'voted'), 'data.csv', '"voted"');
   });
 

@@ -12,10 +12,21 @@ export const WEIGHT_USAGE =
   '[--max-iterations N] [--tolerance T] [--cap C] [--floor F]';
 
 interface Cells {
-  cells: (RakingCell & { successes: number })[];
+  cells: (RakingCell & { successes: number; answered: number; dontKnow: number })[];
   /** Cell index of each data record. */
   cellOf: Int32Array;
 }
+
+/**
+ * Values of the outcome column (any case): 1 or yes, 0 or no, and don't know or no answer,
+ * which are raked but left out of the share (docs/methods.md, section 2). The interviews
+ * export writes yes, no, dont_know and no_answer.
+ */
+const OUTCOME_VALUES: Record<string, 'yes' | 'no' | 'dont_know' | 'no_answer'> = {
+  '1': 'yes', yes: 'yes', '0': 'no', no: 'no',
+  dont_know: 'dont_know', "don't know": 'dont_know', no_answer: 'no_answer', 'no answer': 'no_answer',
+};
+const OUTCOME_EXPECTED = '1 or yes, 0 or no, dont_know or no_answer';
 
 /** Rakes a data file to the targets file and writes it back with a weight column. */
 export function weightCommand(args: string[]): object {
@@ -121,24 +132,27 @@ function buildCells(data: CsvTable, targets: TargetsFile, outcome?: string, base
       base = parseNumber(text) as number;
       key += combinations * b;
     }
-    let success = 0;
+    let answer: (typeof OUTCOME_VALUES)[string] = 'yes';
     if (outcomeAt >= 0) {
       const text = (values[outcomeAt] as string).trim();
-      if (text !== '0' && text !== '1') {
-        throw new CliInputError(`${data.file}: line ${data.line(i)}: outcome ${outcome} is "${text}"; expected 0 or 1`);
+      const known = Object.hasOwn(OUTCOME_VALUES, text.toLowerCase()) ? OUTCOME_VALUES[text.toLowerCase()] : undefined;
+      if (known === undefined) {
+        throw new CliInputError(`${data.file}: line ${data.line(i)}: outcome ${outcome} is "${text}"; expected ${OUTCOME_EXPECTED}`);
       }
-      success = text === '1' ? 1 : 0;
+      answer = known;
     }
     let j = index.get(key);
     if (j === undefined) {
       j = cells.length;
       index.set(key, j);
       const categories = Object.fromEntries(variables.map((v, x) => [v.name, (values[x] as string).trim()]));
-      cells.push({ categories, count: 0, baseWeight: base, successes: 0 });
+      cells.push({ categories, count: 0, baseWeight: base, successes: 0, answered: 0, dontKnow: 0 });
     }
     const cell = cells[j] as Cells['cells'][number];
     cell.count++;
-    cell.successes += success;
+    if (answer === 'yes') cell.successes++;
+    if (answer === 'yes' || answer === 'no') cell.answered++;
+    if (answer === 'dont_know') cell.dontKnow++;
     cellOf[i] = j;
   }
   return { cells, cellOf };

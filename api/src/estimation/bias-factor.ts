@@ -1,6 +1,6 @@
 import { jStat } from './jstat.js';
 import { EstimationInputError } from './errors.js';
-import { withReplacementVariance, type CellInfluence } from './linearised-share.js';
+import { answeredOf, withReplacementVariance, type CellInfluence } from './linearised-share.js';
 
 export const logit = (p: number): number => Math.log(p / (1 - p));
 export const expit = (x: number): number => (x >= 0 ? 1 / (1 + Math.exp(-x)) : Math.exp(x) / (1 + Math.exp(x)));
@@ -13,10 +13,12 @@ export function applyBiasFactor(p: number, b: number): number {
   return expit(logit(p) + logit(b));
 }
 
-/** Interviews in one weighting cell: how many, and how many answered 1. */
+/** Interviews in one weighting cell: how many, how many answered 1 (yes), and how many yes or no. */
 export interface OutcomeCell {
   count: number;
   successes: number;
+  /** Interviews that answered yes or no; the count when left out. */
+  answered?: number;
 }
 
 /** The weighted share and each cell's influence on it, linearised through the raking (linearisedShare). */
@@ -38,14 +40,15 @@ export interface ImpliedBiasFactor {
 
 /**
  * Implied bias factor of a running sample: b = odds(u) / (odds(u) + odds(w)), u the
- * unweighted and w the weighted share, i.e. logit(b) = logit(u) − logit(w).
+ * unweighted and w the weighted share among those who answered yes or no (don't know and
+ * no answer are raked but stay outside both shares), i.e. logit(b) = logit(u) − logit(w).
  *
  * Interval: delta method (Taylor linearisation, Wolter 2007, Introduction to Variance
  * Estimation, ch. 6) on logit(b), with both shares' influences taken jointly because they
  * come from the same interviews:
- *   d_i = (y_i − u) / (n·u(1−u)) − e_i / (w(1−w)),
- * e_i the interview's influence on w linearised through the raking (Deville and Särndal
- * 1992; linearisedShare), not (y_i − w)·weight_i: the raked weights depend on the sample's
+ *   d_i = (y_i − u·x_i) / (a·u(1−u)) − e_i / (w(1−w)),
+ * x_i = 1 for a yes or no and 0 otherwise, a = Σx_i, e_i the interview's influence on the
+ * ratio w linearised through the raking (Deville and Särndal 1992; linearisedShare), not (y_i − w)·weight_i: the raked weights depend on the sample's
  * mix, and treating them as fixed loses that part of the variance exactly when the sample
  * is well balanced. Var = n/(n−1)·Σ d_i², the interval logit(b) ± z·√Var mapped back
  * through the logistic function (docs/methods.md, section 6).
@@ -55,15 +58,19 @@ export function impliedBiasFactor(cells: readonly OutcomeCell[], weighted: Calib
   if (weighted.influence.length !== cells.length) throw new EstimationInputError('one influence per cell is needed');
   let n = 0;
   let k = 0;
+  let a = 0;
   for (const c of cells) {
-    if (!(c.count >= 0 && c.successes >= 0 && c.successes <= c.count)) {
-      throw new EstimationInputError('each cell needs 0 ≤ successes ≤ count');
+    const answered = answeredOf(c);
+    if (!(c.count >= 0 && c.successes >= 0 && c.successes <= answered && answered <= c.count)) {
+      throw new EstimationInputError('each cell needs 0 ≤ successes ≤ answered ≤ count');
     }
     n += c.count;
     k += c.successes;
+    a += answered;
   }
   if (!(n > 1)) throw new EstimationInputError('at least two weighted interviews are needed');
-  const u = k / n;
+  if (!(a > 0)) throw new EstimationInputError('nobody answered yes or no, so there is no share');
+  const u = k / a;
   const w = weighted.share;
   if (u <= 0 || u >= 1 || w <= 0 || w >= 1) {
     return { unweighted: u, weighted: w, factor: null, lower: null, upper: null, standardError: null };
@@ -71,8 +78,9 @@ export function impliedBiasFactor(cells: readonly OutcomeCell[], weighted: Calib
   const influence = cells.map((_, j) => {
     const e = weighted.influence[j] as CellInfluence;
     return {
-      yes: (1 - u) / (n * u * (1 - u)) - e.yes / (w * (1 - w)),
-      no: -u / (n * u * (1 - u)) - e.no / (w * (1 - w)),
+      yes: (1 - u) / (a * u * (1 - u)) - e.yes / (w * (1 - w)),
+      no: -u / (a * u * (1 - u)) - e.no / (w * (1 - w)),
+      other: -e.other / (w * (1 - w)),
     };
   });
   const standardError = Math.sqrt(withReplacementVariance(cells, influence));

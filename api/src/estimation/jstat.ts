@@ -14,10 +14,14 @@ export interface NormalDistribution {
 export interface ChiSquareDistribution {
   cdf(x: number, dof: number): number;
 }
+export interface StudentTDistribution {
+  inv(p: number, dof: number): number;
+}
 export interface JStatStatic {
   beta: BetaDistribution;
   normal: NormalDistribution;
   chisquare: ChiSquareDistribution;
+  studentt: StudentTDistribution;
   gammaln(x: number): number;
   betaln(a: number, b: number): number;
   ibeta(x: number, a: number, b: number): number;

@@ -1,22 +1,41 @@
 import { EstimationInputError } from './errors.js';
 
-/** One raking cell after weighting: its interviews, how many answered 1, base and final weight. */
+/**
+ * One raking cell after weighting: its interviews, how many answered 1 (yes), how many
+ * answered at all (yes or no), base and final weight.
+ */
 export interface CalibratedCell {
   /** Index of the cell's category in each raking variable (same order for every cell). */
   levels: readonly number[];
   count: number;
   successes: number;
+  /** Interviews that answered yes or no (the ratio's denominator); the count when left out. */
+  answered?: number;
   /** Base weight of each interview in the cell (1 when there are none). */
   baseWeight: number;
   /** Final (raked) weight of each interview in the cell; any scale. */
   weight: number;
 }
 
-/** Influence of one interview of a cell on the weighted share, for y = 1 and y = 0. */
+/**
+ * Influence of one interview of a cell on the weighted share, for y = 1 (yes), y = 0 with
+ * x = 1 (no) and x = 0 (don't know or no answer: outside the ratio, but still raked).
+ */
 export interface CellInfluence {
   yes: number;
   no: number;
+  other: number;
 }
+
+/** A cell's interviews by answer: those outside the ratio are `count − answered`. */
+export interface AnswerCounts {
+  count: number;
+  successes: number;
+  answered?: number;
+}
+
+/** Interviews of a cell that answered yes or no. */
+export const answeredOf = (c: AnswerCounts): number => c.answered ?? c.count;
 
 export interface LinearisedShare {
   share: number;
@@ -30,15 +49,19 @@ export interface LinearisedShare {
 }
 
 /**
- * Weighted share of a 0/1 outcome and its standard error linearised through the raking
- * (Deville and Särndal 1992, JASA 87:376; Särndal, Swensson and Wretman 1992, §6.5–6.6), in
- * the form R's survey package uses for `svymean` on a `calibrate(..., calfun = "raking")`
- * design with one stage and no strata: each interview's z_i = (y_i − ŵ) / Σw is regressed
- * on the raking variables' category indicators weighted by the base weights; the residuals
- * times the final weights, u_i, give V = n/(n−1) · Σ (u_i − ū)².
+ * Weighted share of a 0/1 outcome among those who answered, R = Σw·y / Σw·x (x = 1 for a
+ * yes or no, 0 for don't know or no answer; x = 1 for everyone gives the plain weighted
+ * mean), and its standard error linearised through the raking (Deville and Särndal 1992,
+ * JASA 87:376; Särndal, Swensson and Wretman 1992, §5.6 for the ratio and §6.5–6.6 for the
+ * calibration), in the form R's survey package uses for `svyratio(~y, ~x, design)` (and so
+ * `svymean` when x = 1) on a `calibrate(..., calfun = "raking")` design with one stage and
+ * no strata: each interview's z_i = (y_i − R·x_i) / Σw·x is regressed on the raking
+ * variables' category indicators weighted by the base weights; the residuals times the
+ * final weights, u_i, give V = n/(n−1) · Σ (u_i − ū)² over all n raked interviews
+ * (docs/methods.md, section 2).
  *
- * Interviews of a cell differ only by y, so the regression and the sums are done on cell
- * totals: the cost follows the number of cells, not interviews.
+ * Interviews of a cell differ only by their answer, so the regression and the sums are
+ * done on cell totals: the cost follows the number of cells, not interviews.
  */
 export function linearisedShare(cells: readonly CalibratedCell[]): LinearisedShare {
   if (cells.length === 0) throw new EstimationInputError('no interviews to weight');
@@ -49,14 +72,17 @@ export function linearisedShare(cells: readonly CalibratedCell[]): LinearisedSha
   for (const [j, c] of cells.entries()) {
     if (c.levels.length !== variables) throw new EstimationInputError(`cell ${j}: expected ${variables} category indices`);
     if (!(Number.isFinite(c.count) && c.count >= 0)) throw new EstimationInputError(`cell ${j}: count must be a non-negative number`);
-    if (!(c.successes >= 0 && c.successes <= c.count)) throw new EstimationInputError(`cell ${j}: successes must lie between 0 and the count`);
+    const answered = answeredOf(c);
+    if (!(answered >= 0 && answered <= c.count)) throw new EstimationInputError(`cell ${j}: answered must lie between 0 and the count`);
+    if (!(c.successes >= 0 && c.successes <= answered)) throw new EstimationInputError(`cell ${j}: successes must lie between 0 and those who answered`);
     if (!(c.baseWeight > 0 && Number.isFinite(c.baseWeight))) throw new EstimationInputError(`cell ${j}: base weight must be above 0`);
     if (!(c.weight >= 0 && Number.isFinite(c.weight))) throw new EstimationInputError(`cell ${j}: weight must be a non-negative number`);
     n += c.count;
-    total += c.count * c.weight;
+    total += answered * c.weight;
     yes += c.successes * c.weight;
   }
-  if (!(n > 1 && total > 0)) throw new EstimationInputError('need at least two weighted interviews for a standard error');
+  if (!(n > 1)) throw new EstimationInputError('need at least two weighted interviews for a standard error');
+  if (!(total > 0)) throw new EstimationInputError('nobody answered yes or no, so there is no share');
   const share = yes / total;
 
   // Columns: intercept, then one indicator per category of each variable after its first.
@@ -73,13 +99,13 @@ export function linearisedShare(cells: readonly CalibratedCell[]): LinearisedSha
     });
     return cols;
   };
-  // Normal equations X'DX β = X'D z over cells; a cell's z-total is (s − n·ŵ)/Σw.
+  // Normal equations X'DX β = X'D z over cells; a cell's z-total is (s − a·R)/Σw·x.
   const gram = Array.from({ length: p }, () => new Float64Array(p));
   const rhs = new Float64Array(p);
   const cellColumns = cells.map(columns);
   cells.forEach((c, j) => {
     const cols = cellColumns[j] as number[];
-    const zTotal = (c.successes - c.count * share) / total;
+    const zTotal = (c.successes - answeredOf(c) * share) / total;
     for (const a of cols) {
       rhs[a] = (rhs[a] as number) + c.baseWeight * zTotal;
       const row = gram[a] as Float64Array;
@@ -88,28 +114,31 @@ export function linearisedShare(cells: readonly CalibratedCell[]): LinearisedSha
   });
   const beta = solveSymmetric(gram, rhs);
 
-  // u = w·(z − x'β) takes two values in a cell (y = 1 and y = 0).
+  // u = w·(z − x'β) takes three values in a cell (yes, no, and neither).
   let sum = 0;
   const raw = cells.map((c, j) => {
     const fitted = (cellColumns[j] as number[]).reduce((s, a) => s + (beta[a] as number), 0);
     const yes = c.weight * ((1 - share) / total - fitted);
     const no = c.weight * (-share / total - fitted);
-    sum += c.successes * yes + (c.count - c.successes) * no;
-    return { yes, no };
+    const other = c.weight * -fitted;
+    const answered = answeredOf(c);
+    sum += c.successes * yes + (answered - c.successes) * no + (c.count - answered) * other;
+    return { yes, no, other };
   });
   const mean = sum / n;
-  const influence = raw.map(({ yes, no }) => ({ yes: yes - mean, no: no - mean }));
+  const influence = raw.map(({ yes, no, other }) => ({ yes: yes - mean, no: no - mean, other: other - mean }));
   return { share, standardError: Math.sqrt(withReplacementVariance(cells, influence)), influence };
 }
 
 /** n/(n−1) · Σ u_i² over the interviews of cells whose influences are centred (mean 0). */
-export function withReplacementVariance(cells: readonly { count: number; successes: number }[], influence: readonly CellInfluence[]): number {
+export function withReplacementVariance(cells: readonly AnswerCounts[], influence: readonly CellInfluence[]): number {
   let n = 0;
   let sumSquares = 0;
   cells.forEach((c, j) => {
-    const { yes, no } = influence[j] as CellInfluence;
+    const { yes, no, other } = influence[j] as CellInfluence;
+    const answered = answeredOf(c);
     n += c.count;
-    sumSquares += c.successes * yes * yes + (c.count - c.successes) * no * no;
+    sumSquares += c.successes * yes * yes + (answered - c.successes) * no * no + (c.count - answered) * other * other;
   });
   return n > 1 ? (n / (n - 1)) * sumSquares : NaN;
 }

@@ -1,7 +1,7 @@
 import { impliedBiasFactor, type ImpliedBiasFactor } from './bias-factor.js';
 import { jackknifeBiasFactor } from './bias-factor-jackknife.js';
 import { kishDesignEffect } from './design-effect.js';
-import { linearisedShare, type LinearisedShare } from './linearised-share.js';
+import { answeredOf, linearisedShare, type LinearisedShare } from './linearised-share.js';
 import { categoryOf } from './joint-names.js';
 import { marginOf, resolveTargets } from './joint-targets.js';
 import { rake, type MarginReport, type MarginTarget, type RakingCell, type RakingOptions } from './raking.js';
@@ -11,14 +11,36 @@ import { withheldFigures, withholdingReasons, type WithheldFigure } from './with
 /** z of a two-sided 95% normal interval. */
 const Z95 = 1.96;
 
-/** A raking cell that also carries how many of its interviews answered the outcome with 1. */
+/**
+ * A raking cell that also carries how many of its interviews answered the outcome with 1
+ * (yes), how many answered yes or no, and how many of the rest said don't know (the others
+ * gave no answer). Every interview is raked; the share is over those who answered.
+ */
 export interface OutcomeRakingCell extends RakingCell {
   successes: number;
+  /** Interviews that answered yes or no; the count when left out (a 0/1 outcome). */
+  answered?: number;
+  /** Of the interviews that did not answer yes or no, those who said don't know. */
+  dontKnow?: number;
+}
+
+/** Share of all raked interviews giving an answer outside the ratio (docs/methods.md, section 2). */
+export interface OtherAnswerShare {
+  answer: 'dont_know' | 'no_answer';
+  count: number;
+  unweighted: number;
+  weighted: number;
 }
 
 export interface OutcomeSummary {
+  /** Share of yes among those who answered yes or no, unweighted. */
   unweighted: number;
+  /** The same share weighted: a ratio Σw·yes / Σw·answered over the calibrated design. */
   weighted: number;
+  /** Interviews that answered yes or no (the share's base). */
+  answered: number;
+  /** Don't know and no answer, as shares of every raked interview, beside the headline share. */
+  otherAnswers: OtherAnswerShare[];
   /** Standard error of the weighted share, linearised through the raking; null below two interviews. */
   standardError: number | null;
   /** Korn–Graubard 95% interval [lower, upper] of the weighted share; null below two interviews. */
@@ -92,19 +114,23 @@ export function summariseWeighting(
     weights,
     withheld: [],
   };
-  if (withOutcome) {
+  const answered = cells.reduce((s, c) => s + answeredOf(c), 0);
+  if (withOutcome && answered > 0) {
     const linearised = linearise(cells, targets, weights);
     const bias = biasFactor(cells, targets, options, linearised);
+    const answeredSize = answeredEffectiveSize(cells, weights);
     summary.outcome = {
       unweighted: bias.unweighted,
       weighted: bias.weighted,
-      ...shareError(linearised, deff.effectiveSampleSize),
+      answered,
+      otherAnswers: otherAnswers(cells, weights),
+      ...shareError(linearised, answeredSize, { rows: deff.n, df: answered - 1 }),
       impliedBiasFactor: bias.factor,
       impliedBiasFactorInterval: bias.lower === null || bias.upper === null ? null : [bias.lower, bias.upper],
       impliedBiasFactorMethod: bias.method,
     };
     summary.withheld = withheldFigures(
-      withholdingReasons({ ...result, effectiveSampleSize: deff.effectiveSampleSize, cells, targets, emptyInterlockedCells }),
+      withholdingReasons({ ...result, effectiveSampleSize: deff.effectiveSampleSize, answeredEffectiveSize: answeredSize, cells, targets, emptyInterlockedCells }),
     );
     for (const { figure } of summary.withheld) summary.outcome[figure] = null;
   }
@@ -112,9 +138,37 @@ export function summariseWeighting(
 }
 
 export const SHARE_METHOD =
+  'share of yes among those who answered yes or no, a ratio estimator; ' +
   'standard error linearised through the raking (Deville and Särndal 1992); ' +
   'interval Korn and Graubard (1998) Clopper–Pearson on the effective sample size; ' +
   'for quota samples a model-based figure';
+
+/** Kish's effective size of those who answered yes or no: (Σ a·w)² / Σ a·w². */
+function answeredEffectiveSize(cells: readonly OutcomeRakingCell[], weights: readonly number[]): number {
+  let sum = 0;
+  let squares = 0;
+  cells.forEach((c, j) => {
+    const w = weights[j] as number;
+    sum += answeredOf(c) * w;
+    squares += answeredOf(c) * w * w;
+  });
+  return squares > 0 ? (sum * sum) / squares : 0;
+}
+
+function otherAnswers(cells: readonly OutcomeRakingCell[], weights: readonly number[]): OtherAnswerShare[] {
+  if (!cells.some((c) => c.answered !== undefined)) return [];
+  const n = cells.reduce((s, c) => s + c.count, 0);
+  const total = cells.reduce((s, c, j) => s + c.count * (weights[j] as number), 0);
+  const share = (answer: OtherAnswerShare['answer'], countOf: (c: OutcomeRakingCell) => number): OtherAnswerShare => {
+    const count = cells.reduce((s, c) => s + countOf(c), 0);
+    const weighted = cells.reduce((s, c, j) => s + countOf(c) * (weights[j] as number), 0);
+    return { answer, count, unweighted: n > 0 ? count / n : 0, weighted: total > 0 ? weighted / total : 0 };
+  };
+  return [
+    share('dont_know', (c) => c.dontKnow ?? 0),
+    share('no_answer', (c) => c.count - answeredOf(c) - (c.dontKnow ?? 0)),
+  ];
+}
 
 function positionOf(given: string[], variable: string, joint: readonly MarginTarget[]): number {
   const own = given.indexOf(variable);
@@ -144,6 +198,7 @@ function linearise(cells: readonly OutcomeRakingCell[], targets: readonly Margin
     levels: targets.map((t, v) => index[v]?.get(categoryOf(c.categories, t) as string) as number),
     count: c.count,
     successes: c.successes,
+    answered: answeredOf(c),
     baseWeight: c.baseWeight ?? 1,
     weight: weights[j] as number,
   })));
@@ -152,10 +207,11 @@ function linearise(cells: readonly OutcomeRakingCell[], targets: readonly Margin
 function shareError(
   linearised: LinearisedShare | null,
   kishSize: number,
+  degrees: { rows: number; df: number },
 ): Pick<OutcomeSummary, 'standardError' | 'interval' | 'method' | 'marginOfError'> {
   if (linearised === null) return { standardError: null, interval: null, method: SHARE_METHOD, marginOfError: null };
   const { share, standardError } = linearised;
-  const { lower, upper } = kornGraubardInterval(share, standardError, kishSize);
+  const { lower, upper } = kornGraubardInterval(share, standardError, kishSize, 0.95, degrees);
   return { standardError, interval: [lower, upper], method: SHARE_METHOD, marginOfError: Z95 * standardError };
 }
 
@@ -169,8 +225,8 @@ function biasFactor(
   linearised: LinearisedShare | null,
 ): ImpliedBiasFactor & { method: string } {
   if (linearised === null) {
-    const n = cells.reduce((s, c) => s + c.count, 0);
-    const u = n > 0 ? cells.reduce((s, c) => s + c.successes, 0) / n : NaN;
+    const a = cells.reduce((s, c) => s + answeredOf(c), 0);
+    const u = a > 0 ? cells.reduce((s, c) => s + c.successes, 0) / a : NaN;
     return { unweighted: u, weighted: u, factor: null, lower: null, upper: null, standardError: null, method: BIAS_DELTA_METHOD };
   }
   if (needsJackknife(cells)) return { ...jackknifeBiasFactor(cells, targets, options), method: BIAS_JACKKNIFE_METHOD };
@@ -188,6 +244,6 @@ export const JACKKNIFE_BELOW = 100;
 
 function needsJackknife(cells: readonly OutcomeRakingCell[]): boolean {
   const yes = cells.reduce((s, c) => s + c.successes, 0);
-  const no = cells.reduce((s, c) => s + c.count, 0) - yes;
+  const no = cells.reduce((s, c) => s + answeredOf(c), 0) - yes;
   return Math.min(yes, no) < JACKKNIFE_BELOW;
 }

@@ -23,6 +23,8 @@ export interface WithholdingInput {
   iterations: number;
   maxMarginError: number;
   effectiveSampleSize: number;
+  /** Kish's effective size of those who answered yes or no (the headline share's base). */
+  answeredEffectiveSize?: number;
   cells: readonly { categories: Readonly<Record<string, string>>; count: number }[];
   targets: readonly MarginTarget[];
   /** Labels of interlocked quota cells that have a target but no interviews (known to the API only). */
@@ -38,6 +40,10 @@ export function withholdingReasons(input: WithholdingInput): string[] {
   }
   if (input.effectiveSampleSize < MIN_EFFECTIVE_SIZE) {
     reasons.push(`the effective sample size is ${input.effectiveSampleSize.toFixed(1)}, under ${MIN_EFFECTIVE_SIZE}`);
+  }
+  const answered = input.answeredEffectiveSize;
+  if (answered !== undefined && answered < MIN_EFFECTIVE_SIZE && input.effectiveSampleSize >= MIN_EFFECTIVE_SIZE) {
+    reasons.push(`the effective number who answered yes or no is ${answered.toFixed(1)}, under ${MIN_EFFECTIVE_SIZE}`);
   }
   for (const target of input.targets) {
     for (const { category, share } of target.shares) {

@@ -1,5 +1,6 @@
 // Streams a project's counted completes as CSV, one row per interview, with one column
-// per current quota variable, the headline answer as 0/1 and the interview's flag codes
+// per current quota variable, the headline answer (yes, no, dont_know or no_answer: what
+// `plumbline weight --outcome headline` reads) and the interview's flag codes
 // (separated by ";", empty when none). Respondents appear only through their categories
 // and answer.
 import { Inject, Injectable } from '@nestjs/common';
@@ -32,7 +33,7 @@ export class ExportService {
       // (owasp.org/www-community/attacks/CSV_Injection): prefix such cells with a single quote.
       escape_formulas: true,
     });
-    const toRecord = async function* (source: AsyncIterable<{ id: string; field_day: string; category_ids: string[]; headline_answer: boolean; over_quota: boolean; review_status: string; flags: string[] }>) {
+    const toRecord = async function* (source: AsyncIterable<{ id: string; field_day: string; category_ids: string[]; headline_answer: string; over_quota: boolean; review_status: string; flags: string[] }>) {
       for await (const r of source) {
         const byVariable = variables.map((v) => v.categories.find((c) => r.category_ids.includes(c.id))?.label ?? '');
         yield [r.id, r.field_day, ...byVariable, r.headline_answer, r.over_quota, r.review_status, r.flags.join(';')];

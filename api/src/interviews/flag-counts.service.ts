@@ -5,10 +5,26 @@ import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
 import { FLAG_CODES, FLAG_REASONS, type FlagCode } from './flags.js';
 
+/** An interview voided after it was sent: who logged it, who voided it, when and why. */
+export interface VoidedInterview {
+  id: string;
+  disposition: string;
+  fieldDay: string;
+  interviewer: string;
+  voidedBy: string;
+  voidedAt: string;
+  reason: string;
+}
+
+/** The most recent voids listed with their reasons; the count by reason covers them all. */
+export const VOIDED_LISTED = 50;
+
 export interface FlaggedInterviews {
   /** Interviews with at least one flag (one interview may carry several). */
   total: number;
   byReason: { code: string; reason: string; count: number }[];
+  /** The latest voided interviews, newest first, with who voided them and why. */
+  voided: VoidedInterview[];
 }
 
 const order = (code: string) => (FLAG_CODES.includes(code as FlagCode) ? FLAG_CODES.indexOf(code as FlagCode) : FLAG_CODES.length);
@@ -25,7 +41,24 @@ export class FlagCountsService {
         GROUP BY ROLLUP (f.code)`, // the row with no code is the total of interviews
       [projectId],
     );
+    const voided = await this.db('interviews as i')
+      .join('users as who', 'who.id', 'i.interviewer_id')
+      .join('users as by', 'by.id', 'i.voided_by')
+      .where('i.project_id', projectId)
+      .whereNotNull('i.voided_at')
+      .orderBy([{ column: 'i.voided_at', order: 'desc' }, { column: 'i.id' }])
+      .limit(VOIDED_LISTED)
+      .select('i.id', 'i.disposition', 'i.field_day', 'who.name as interviewer', 'by.name as voided_by_name', 'i.voided_at', 'i.void_reason');
     return {
+      voided: voided.map((v) => ({
+        id: v.id,
+        disposition: v.disposition,
+        fieldDay: v.field_day,
+        interviewer: v.interviewer,
+        voidedBy: v.voided_by_name,
+        voidedAt: new Date(v.voided_at).toISOString(),
+        reason: v.void_reason,
+      })),
       total: rows.find((r) => r.code === null)?.n ?? 0,
       byReason: rows
         .filter((r) => r.code !== null)

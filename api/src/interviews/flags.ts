@@ -5,6 +5,7 @@
 export const FLAG_REASONS = {
   project_closed: 'Sent after the project was closed',
   outside_field_dates: 'Ended more than a day outside the field dates',
+  voided: 'Voided after it was sent (no longer counted); the reason is kept with it',
 } as const;
 
 export type FlagCode = keyof typeof FLAG_REASONS;

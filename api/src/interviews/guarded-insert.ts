@@ -8,7 +8,7 @@ import { Logger } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { InterviewRow } from '../database/tables.js';
 
-export type NewInterview = Omit<InterviewRow, 'received_at' | 'review_status' | 'counted'>;
+export type NewInterview = Omit<InterviewRow, 'received_at' | 'review_status' | 'counted' | 'voided_at' | 'voided_by' | 'void_reason'>;
 
 export interface InsertOutcome {
   /** Ids this statement stored. */

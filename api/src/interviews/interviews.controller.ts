@@ -10,7 +10,9 @@ import { ExportService } from './export.service.js';
 import { FlagCountsService } from './flag-counts.service.js';
 import { SyncService } from './sync.service.js';
 import { FlaggedInterviewsResponse } from './dto/flags-response.dto.js';
-import { SyncReplyResponse } from './dto/sync-response.dto.js';
+import { SyncReplyResponse, VoidResultResponse } from './dto/sync-response.dto.js';
+import { VoidInterviewDto } from './dto/void-item.dto.js';
+import { VoidService } from './void.service.js';
 
 @ApiTags('interviews')
 @ApiBearerAuth()
@@ -21,6 +23,7 @@ export class InterviewsController {
     private readonly exportService: ExportService,
     private readonly access: ProjectAccess,
     private readonly flagCounts: FlagCountsService,
+    private readonly voids: VoidService,
   ) {}
 
   /** Idempotent upload: each interview is answered accepted, duplicate or rejected with a reason. */
@@ -30,6 +33,20 @@ export class InterviewsController {
   @ApiOkResponse({ type: SyncReplyResponse })
   sync(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Body() dto: SyncBatchDto) {
     return this.syncService.sync(user, projectId, dto.interviews);
+  }
+
+  /** A supervisor's void of one interview, with a reason; it stops counting at once. Again: duplicate. */
+  @Post(':interviewId/void')
+  @HttpCode(200)
+  @Roles('supervisor', 'lead', 'admin')
+  @ApiOkResponse({ type: VoidResultResponse })
+  void(
+    @CurrentUser() user: AuthUser,
+    @Param('projectId', ParseUUIDPipe) projectId: string,
+    @Param('interviewId', ParseUUIDPipe) interviewId: string,
+    @Body() dto: VoidInterviewDto,
+  ) {
+    return this.voids.voidOne(user, projectId, interviewId, dto.reason);
   }
 
   /** Kept-and-flagged interviews counted by reason, for the quota board. */

@@ -5,6 +5,7 @@ import { InterviewsController } from './interviews.controller.js';
 import { ExportService } from './export.service.js';
 import { FlagCountsService } from './flag-counts.service.js';
 import { SyncService } from './sync.service.js';
+import { VoidService } from './void.service.js';
 
-@Module({ imports: [ProjectsModule, QuotasModule], controllers: [InterviewsController], providers: [SyncService, ExportService, FlagCountsService] })
+@Module({ imports: [ProjectsModule, QuotasModule], controllers: [InterviewsController], providers: [SyncService, ExportService, FlagCountsService, VoidService] })
 export class InterviewsModule {}

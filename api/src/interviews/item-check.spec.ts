@@ -8,7 +8,7 @@ const valid = () => ({
   id: randomUUID(),
   disposition: 'complete',
   categories: {},
-  headlineAnswer: true,
+  headlineAnswer: 'yes',
   startedAt: '2026-11-20T10:00:00Z',
   endedAt: '2026-11-20T10:15:00.250Z',
 });
@@ -16,6 +16,25 @@ const reasonOf = (raw: unknown) => {
   const result = checkItem(raw);
   return result.ok ? null : result.reason;
 };
+
+describe('the headline answer', () => {
+  const answerOf = (headlineAnswer: unknown) => {
+    const result = checkItem({ ...valid(), headlineAnswer });
+    return result.ok ? result.item.headlineAnswer : result.reason;
+  };
+
+  it('takes yes, no, don\'t know and no answer, and reads an older device\'s true and false as yes and no', () => {
+    for (const answer of ['yes', 'no', 'dont_know', 'no_answer']) expect(answerOf(answer)).toBe(answer);
+    expect(answerOf(true)).toBe('yes');
+    expect(answerOf(false)).toBe('no');
+  });
+
+  it('refuses any other value, naming the four answers', () => {
+    for (const bad of ['maybe', 'Yes', 1, ['yes']]) {
+      expect(answerOf(bad)).toBe('headlineAnswer must be one of yes, no, dont_know, no_answer');
+    }
+  });
+});
 
 describe('reading a device’s date and time', () => {
   it('reads RFC 3339 date-times with Z or an offset, to the millisecond', () => {
@@ -121,7 +140,7 @@ describe('categories against the project’s targets', () => {
     ],
   };
   const item = (over: Partial<CheckedItem>): CheckedItem => ({
-    id: randomUUID(), disposition: 'complete', categories: { 'v-age': 'c-young' }, headlineAnswer: true, startedAt: new Date(), endedAt: new Date(), ...over,
+    id: randomUUID(), disposition: 'complete', categories: { 'v-age': 'c-young' }, headlineAnswer: 'yes', startedAt: new Date(), endedAt: new Date(), ...over,
   });
 
   it('gives the category ids, and plain reasons without raw ids', () => {

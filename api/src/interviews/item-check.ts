@@ -3,7 +3,7 @@
 // item never fails its batch. Nothing here reads or writes storage.
 import { plainToInstance } from 'class-transformer';
 import { validateSync, type ValidationError } from 'class-validator';
-import type { Disposition } from '../database/tables.js';
+import type { Disposition, HeadlineAnswer } from '../database/tables.js';
 import type { ActiveTargets } from '../quotas/cell-allocator.js';
 import { InterviewItemDto } from './dto/sync.dto.js';
 
@@ -13,7 +13,7 @@ export interface CheckedItem {
   id: string;
   disposition: Disposition;
   categories: Record<string, unknown>;
-  headlineAnswer: boolean | undefined;
+  headlineAnswer: HeadlineAnswer | undefined;
   startedAt: Date;
   endedAt: Date;
 }
@@ -98,7 +98,7 @@ export function checkItem(raw: unknown): ItemCheck {
       id: canonical,
       disposition: dto.disposition,
       categories,
-      headlineAnswer: dto.headlineAnswer ?? undefined,
+      headlineAnswer: typeof dto.headlineAnswer === 'boolean' ? (dto.headlineAnswer ? 'yes' : 'no') : (dto.headlineAnswer ?? undefined),
       startedAt: started.at,
       endedAt: ended.at,
     };

@@ -18,10 +18,13 @@ import { CellsService, withCounts, type CellView } from '../quotas/cells.service
 import { flagsOnArrival, type FlagCode } from './flags.js';
 import { insertAll, insertGuarded, type NewInterview } from './guarded-insert.js';
 import { checkCategories, checkItem, type CheckedItem } from './item-check.js';
+import { counted } from './counted.js';
+import { applyVoid, checkVoid, isVoidItem, type VoidCheck } from './void-items.js';
 
 export type SyncResult =
   | { id: string | null; status: 'accepted'; overQuota: boolean; overQuotaCells: string[]; flags: FlagCode[] }
   | { id: string | null; status: 'duplicate' }
+  | { id: string | null; status: 'voided' }
   | { id: string | null; status: 'rejected'; reason: string };
 
 export interface SyncReply {
@@ -29,6 +32,8 @@ export interface SyncReply {
   results: SyncResult[];
   accepted: number;
   duplicates: number;
+  /** Void items that voided an interview (void-items.ts); voiding one again is a duplicate. */
+  voided: number;
   rejected: number;
   cells: CellView[];
 }
@@ -44,6 +49,8 @@ const REFUSED = 'the server could not store this interview; keep it on the devic
 
 interface ReadBeforeLock {
   checked: ReturnType<typeof checkItem>[];
+  /** Void items by their place in the batch (their `checked` entry is a stand-in). */
+  voids: Map<number, VoidCheck>;
   targets: ActiveTargets;
   /** Ids of the batch already stored, with whose they are. */
   known: Map<string, { id: string; project_id: string; interviewer_id: string }>;
@@ -63,7 +70,12 @@ export class SyncService {
 
   async sync(user: AuthUser, projectId: string, batch: unknown[]): Promise<SyncReply> {
     await this.access.findForInterviewer(user, projectId);
-    const checked = batch.map(checkItem);
+    const voids = new Map<number, VoidCheck>();
+    const checked = batch.map((raw, index) => {
+      if (!isVoidItem(raw)) return checkItem(raw);
+      voids.set(index, checkVoid(raw));
+      return { ok: false as const, id: null, reason: 'void' };
+    });
     // The project's lock is held for as few round trips as possible (lock, cells, insert,
     // commit). The targets and the ids already stored are read before it, side by side: an id
     // stored meanwhile is caught after the insert, and a target changed meanwhile is the
@@ -80,7 +92,7 @@ export class SyncService {
       this.db.transaction(async (trx) => {
         // The lock also gives the project's status and field dates as they are now.
         const project = (await trx('projects').where({ id: projectId }).forUpdate().first()) as ProjectRow;
-        return this.store(trx, user, project, { checked, targets, known }, guarded);
+        return this.store(trx, user, project, { checked, voids, targets, known }, guarded);
       });
     let stored: { results: SyncResult[]; cells: CellView[] };
     try {
@@ -91,7 +103,7 @@ export class SyncService {
     }
     const { results, cells } = stored;
     const count = (status: SyncResult['status']) => results.filter((r) => r.status === status).length;
-    return { results, accepted: count('accepted'), duplicates: count('duplicate'), rejected: count('rejected'), cells };
+    return { results, accepted: count('accepted'), duplicates: count('duplicate'), voided: count('voided'), rejected: count('rejected'), cells };
   }
 
   private async store(trx: Knex.Transaction, user: AuthUser, project: ProjectRow, read: ReadBeforeLock, guarded: boolean) {
@@ -121,7 +133,7 @@ export class SyncService {
       if (!Array.isArray(categories)) return { id: item.id, status: 'rejected', reason: categories.reason };
       firstCopy.set(item.id, { index, fingerprint: fingerprint(item) });
       let fullCells: string[] = [];
-      if (item.disposition === 'complete') {
+      if (counted({ disposition: item.disposition })) {
         const mine = cells.filter((cell) => cell.categoryIds.every((id) => categories.includes(id)));
         fullCells = mine.filter((cell) => cell.status === 'closed' || cell.achieved >= cell.target).map((cell) => cell.id);
         for (const cell of mine) cell.achieved += 1;
@@ -135,7 +147,7 @@ export class SyncService {
         interviewer_id: user.id,
         disposition: item.disposition,
         category_ids: categories,
-        headline_answer: item.disposition === 'complete' ? (item.headlineAnswer as boolean) : null,
+        headline_answer: item.disposition === 'complete' ? (item.headlineAnswer ?? null) : null,
         started_at: item.startedAt,
         ended_at: item.endedAt,
         field_day: day,
@@ -159,13 +171,26 @@ export class SyncService {
     });
     // A repeat inside the batch shares the fate of its first copy: never "duplicate" of something not stored.
     for (const [index, first] of repeats) if (out[first]!.status !== 'accepted') out[index] = out[first]!;
-    return { results: out, cells: cellsAfter(before, rows.filter((r) => stored.has(r.id))) };
+    // Voids after the new interviews, one by one (a device sends few); each is its item's result.
+    let anyVoided = false;
+    for (const [index, check] of read.voids) {
+      if (!check.ok) {
+        out[index] = { id: check.id, status: 'rejected', reason: check.reason };
+        continue;
+      }
+      const outcome = await applyVoid(trx, user, project.id, check.item);
+      anyVoided ||= outcome.status === 'voided';
+      out[index] = { id: check.item.id, ...outcome };
+    }
+    // A void moves counts the batch did not add: read them again (the trigger has run) under the lock.
+    const after = anyVoided ? await this.cells.cellCounts(project.id, trx) : cellsAfter(before, rows.filter((r) => stored.has(r.id)));
+    return { results: out, cells: after };
   }
 }
 
 /** The cells after this batch: the counts read under the lock plus the completes it stored. */
 function cellsAfter(before: CellView[], stored: NewInterview[]): CellView[] {
-  const completes = stored.filter((row) => row.disposition === 'complete');
+  const completes = stored.filter((row) => counted(row));
   return before.map((cell) => {
     const mine = completes.filter((row) => cell.categoryIds.every((id) => row.category_ids.includes(id)));
     return withCounts(cell, cell.achieved + mine.length, cell.overQuota + mine.filter((row) => row.over_quota_cells.includes(cell.id)).length);

@@ -2,7 +2,7 @@
 // the server acknowledges them; only the sync module removes them after the server's reply,
 // or the interviewer discards one the server refused.
 import { useLiveQuery } from 'dexie-react-hooks';
-import { db, type InterviewRecord, type OutboxEntry } from './plumbline-db';
+import { db, isVoidRecord, type HeadlineAnswer, type InterviewRecord, type OutboxEntry, type SentEntry } from './plumbline-db';
 
 export async function countUnsent(): Promise<number> {
   return db.outbox.count();
@@ -66,4 +66,53 @@ export async function discardRejected(clientId: string, interviewerId: string): 
     await db.outbox.delete(clientId);
     return true;
   });
+}
+
+/**
+ * Voids a contact still waiting on the device: it is removed and never sent. Only the
+ * interviewer's own waiting contact; false when it has gone meanwhile (sent, or not theirs).
+ */
+export async function voidWaiting(clientId: string, interviewerId: string): Promise<boolean> {
+  return db.transaction('rw', db.outbox, async () => {
+    const entry = await db.outbox.get(clientId);
+    if (!entry || entry.interviewerId !== interviewerId || isRejected(entry) || isVoidRecord(entry.payload)) return false;
+    await db.outbox.delete(clientId);
+    return true;
+  });
+}
+
+/** Changes the headline answer of a complete still waiting on the device; false when it has gone meanwhile. */
+export async function changeWaitingAnswer(clientId: string, interviewerId: string, answer: HeadlineAnswer): Promise<boolean> {
+  return db.transaction('rw', db.outbox, async () => {
+    const entry = await db.outbox.get(clientId);
+    const record = entry?.payload as InterviewRecord | undefined;
+    if (!entry || entry.interviewerId !== interviewerId || isRejected(entry) || record?.disposition !== 'complete') return false;
+    await db.outbox.update(clientId, { payload: { ...record, headlineAnswer: answer } });
+    return true;
+  });
+}
+
+/** Queues the void of a contact the server already has; the sync module sends it. */
+export async function addVoidToOutbox(sent: SentEntry, interviewerId: string, reason: string): Promise<boolean> {
+  return db.transaction('rw', db.outbox, db.sent, async () => {
+    const current = await db.sent.get(sent.clientId);
+    if (!current || current.interviewerId !== interviewerId || current.voidReason !== undefined) return false;
+    await db.outbox.put({
+      clientId: sent.clientId,
+      interviewerId,
+      projectId: sent.projectId,
+      createdAt: new Date().toISOString(),
+      payload: { kind: 'void', id: sent.clientId, reason },
+    });
+    await db.sent.update(sent.clientId, { voidReason: reason });
+    return true;
+  });
+}
+
+/** This interviewer's acknowledged contacts, newest first; `undefined` while reading. */
+export function useSentEntries(interviewerId: string | undefined): SentEntry[] | undefined {
+  return useLiveQuery(
+    async () => (interviewerId ? (await db.sent.where('interviewerId').equals(interviewerId).sortBy('sentAt')).reverse() : undefined),
+    [interviewerId],
+  );
 }

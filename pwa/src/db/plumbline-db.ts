@@ -11,6 +11,9 @@
 //                 every step, so a reload, a crash or a closed tab returns to the same step
 //                 with the same answers. Saving the contact moves it to the outbox and
 //                 deletes the draft in one transaction.
+//   sent          (v4) contacts the server acknowledged in the last two weeks, so the
+//                 interviewer can still void one logged by mistake (a void goes through the
+//                 outbox like any contact: a VoidRecord).
 // Everything here works offline; nothing here is ever sent except by the sync module.
 import { Dexie, type EntityTable, type Table } from 'dexie';
 import type { UserProfileResponse } from '../lib/api-types';
@@ -31,15 +34,42 @@ export interface StoredSession {
 
 export type Disposition = 'complete' | 'partial' | 'refusal' | 'non_contact' | 'other' | 'not_eligible';
 
+/** Answers to the headline question; the headline share is over yes and no. */
+export type HeadlineAnswer = 'yes' | 'no' | 'dont_know' | 'no_answer';
+
 /** One contact exactly as the sync API takes it: categories, answer and paradata only. */
 export interface InterviewRecord {
   id: string;
   disposition: Disposition;
   /** Quota variable id → category id (every variable for a complete). */
   categories?: Record<string, string>;
-  headlineAnswer?: boolean;
+  /** true and false are what an older app stored; the server reads them as yes and no. */
+  headlineAnswer?: HeadlineAnswer | boolean;
   startedAt: string;
   endedAt: string;
+}
+
+/** A request to void a contact the server already has, sent through the outbox like a contact. */
+export interface VoidRecord {
+  kind: 'void';
+  /** The voided contact's UUID. */
+  id: string;
+  reason: string;
+}
+
+export function isVoidRecord(payload: unknown): payload is VoidRecord {
+  return typeof payload === 'object' && payload !== null && (payload as { kind?: unknown }).kind === 'void';
+}
+
+/** A contact the server acknowledged, kept a while so it can still be voided. */
+export interface SentEntry {
+  clientId: string;
+  interviewerId: string;
+  projectId: string;
+  sentAt: string;
+  record: InterviewRecord;
+  /** Set once the interviewer voided it (the void itself waits in the outbox until sent). */
+  voidReason?: string;
 }
 
 export interface OutboxEntry {
@@ -66,7 +96,8 @@ export interface ContactDraft {
   step: DraftStep;
   disposition: Disposition;
   categories: Record<string, string>;
-  headlineAnswer?: boolean;
+  /** true and false are what an older app stored (yes and no). */
+  headlineAnswer?: HeadlineAnswer | boolean;
   /** When the contact was started (becomes the interview's startedAt). */
   startedAt: string;
   updatedAt: string;
@@ -110,6 +141,7 @@ export class PlumblineDb extends Dexie {
   projectCache!: Table<CachedProject, [string, string]>;
   cellCache!: EntityTable<CachedCells, 'projectId'>;
   drafts!: EntityTable<ContactDraft, 'interviewerId'>;
+  sent!: EntityTable<SentEntry, 'clientId'>;
 
   constructor() {
     super('plumbline');
@@ -128,6 +160,8 @@ export class PlumblineDb extends Dexie {
     });
     // v3 adds drafts of contacts being logged.
     this.version(3).stores({ drafts: 'interviewerId' });
+    // v4 keeps acknowledged contacts for a while, so they can be voided.
+    this.version(4).stores({ sent: 'clientId, interviewerId, sentAt' });
   }
 }
 

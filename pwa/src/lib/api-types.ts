@@ -321,6 +321,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/interviews/{interviewId}/void": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["InterviewsController_void"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{projectId}/interviews/export.csv": {
         parameters: {
             query?: never;
@@ -629,6 +645,8 @@ export interface components {
             weighted: number | null;
         };
         BalanceOutcomeResponse: {
+            /** @description Counted completes that answered yes or no (the share's base) */
+            answered: number;
             /** @example headline */
             column: string;
             impliedBiasFactor?: number | null;
@@ -648,9 +666,13 @@ export interface components {
             marginOfError?: number | null;
             /** @description How standardError and interval were computed */
             method?: string;
-            /** @description Standard error of the weighted share, linearised through the raking */
+            /** @description Don't know and no answer, reported beside the share */
+            otherAnswers?: components["schemas"]["OtherAnswerResponse"][];
+            /** @description Standard error of the weighted share, a ratio estimator linearised through the raking */
             standardError?: number | null;
+            /** @description Share of yes among those who answered yes or no */
             unweighted: number;
+            /** @description Share of yes among those who answered, after raking every complete */
             weighted?: number;
         };
         BalanceResponse: {
@@ -761,7 +783,7 @@ export interface components {
          * @description Kept but flagged for the supervisor
          * @enum {string}
          */
-        FlagCode: "project_closed" | "outside_field_dates";
+        FlagCode: "project_closed" | "outside_field_dates" | "voided";
         FlagCountResponse: {
             /**
              * @description A flag code (see FlagCode); older rows may carry codes no longer set
@@ -776,6 +798,8 @@ export interface components {
             byReason: components["schemas"]["FlagCountResponse"][];
             /** @description Interviews with at least one flag; one interview may carry several */
             total: number;
+            /** @description The latest 50 voided interviews, newest first, with why */
+            voided: components["schemas"]["VoidedInterviewResponse"][];
         };
         HealthResponse: {
             /** @enum {string} */
@@ -855,6 +879,17 @@ export interface components {
             id: string;
             /** @example Vellmoor Field Research */
             name: string;
+        };
+        /** @enum {string} */
+        OtherAnswer: "dont_know" | "no_answer";
+        OtherAnswerResponse: {
+            answer: components["schemas"]["OtherAnswer"];
+            /** @description Counted completes giving this answer */
+            count: number;
+            /** @description Share of all counted completes used */
+            unweighted: number;
+            /** @description The same share after raking */
+            weighted: number;
         };
         OwnAssignmentResponse: {
             /** @description Quota cells to work; empty: any cell */
@@ -1099,7 +1134,7 @@ export interface components {
             enabled: boolean;
         };
         SyncBatchDto: {
-            /** @description Up to 1000 interviews */
+            /** @description Up to 1000 items: new interviews (InterviewItemDto), or voids of interviews already sent ({ kind: "void", id, reason }: VoidItemDto) */
             interviews: Record<string, never>[];
         };
         SyncReplyResponse: {
@@ -1109,7 +1144,9 @@ export interface components {
             duplicates: number;
             rejected: number;
             /** @description One result per item, in the order sent */
-            results: (components["schemas"]["AcceptedItemResponse"] | components["schemas"]["DuplicateItemResponse"] | components["schemas"]["RejectedItemResponse"])[];
+            results: (components["schemas"]["AcceptedItemResponse"] | components["schemas"]["DuplicateItemResponse"] | components["schemas"]["VoidedItemResponse"] | components["schemas"]["RejectedItemResponse"])[];
+            /** @description Void items that voided an interview */
+            voided: number;
         };
         TargetCategoryDto: {
             /** @example 18-34 */
@@ -1194,6 +1231,53 @@ export interface components {
              */
             status: "invited" | "active" | "disabled";
         };
+        VoidedInterviewResponse: {
+            /** @example complete */
+            disposition: string;
+            /**
+             * @description Field day of the interview (YYYY-MM-DD)
+             * @example 2026-11-20
+             */
+            fieldDay: string;
+            /** Format: uuid */
+            id: string;
+            /** @description Name of the interviewer who logged it */
+            interviewer: string;
+            /** @example Logged twice by mistake */
+            reason: string;
+            /** Format: date-time */
+            voidedAt: string;
+            /** @description Name of whoever voided it (the interviewer or a supervisor) */
+            voidedBy: string;
+        };
+        VoidedItemResponse: {
+            /**
+             * Format: uuid
+             * @description The voided interview
+             */
+            id: string | null;
+            /**
+             * @description A void item: the interview no longer counts; voiding it again answers duplicate
+             * @enum {string}
+             */
+            status: "voided";
+        };
+        VoidInterviewDto: {
+            /**
+             * @description Why (1 to 500 characters)
+             * @example Respondent outside the survey population
+             */
+            reason: string;
+        };
+        VoidResultResponse: {
+            /** Format: uuid */
+            id: string;
+            /**
+             * @description duplicate: it was already voided, nothing changed
+             * @enum {string}
+             */
+            status: "voided" | "duplicate";
+        };
         /** @enum {string} */
         WithheldFigureName: "standardError" | "interval" | "marginOfError" | "impliedBiasFactorInterval";
         WithheldFigureResponse: {
@@ -1232,6 +1316,8 @@ export type LinkTokenDto = components['schemas']['LinkTokenDto'];
 export type LoginDto = components['schemas']['LoginDto'];
 export type MessageResponse = components['schemas']['MessageResponse'];
 export type OrganisationRefResponse = components['schemas']['OrganisationRefResponse'];
+export type OtherAnswer = components['schemas']['OtherAnswer'];
+export type OtherAnswerResponse = components['schemas']['OtherAnswerResponse'];
 export type OwnAssignmentResponse = components['schemas']['OwnAssignmentResponse'];
 export type OwnProgressResponse = components['schemas']['OwnProgressResponse'];
 export type ParsedCategoryResponse = components['schemas']['ParsedCategoryResponse'];
@@ -1267,6 +1353,10 @@ export type TargetVariableDto = components['schemas']['TargetVariableDto'];
 export type UpdateProjectDto = components['schemas']['UpdateProjectDto'];
 export type UserProfileResponse = components['schemas']['UserProfileResponse'];
 export type UserResponse = components['schemas']['UserResponse'];
+export type VoidedInterviewResponse = components['schemas']['VoidedInterviewResponse'];
+export type VoidedItemResponse = components['schemas']['VoidedItemResponse'];
+export type VoidInterviewDto = components['schemas']['VoidInterviewDto'];
+export type VoidResultResponse = components['schemas']['VoidResultResponse'];
 export type WithheldFigureName = components['schemas']['WithheldFigureName'];
 export type WithheldFigureResponse = components['schemas']['WithheldFigureResponse'];
 export type $defs = Record<string, never>;
@@ -1799,6 +1889,32 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["CellResponse"];
+                };
+            };
+        };
+    };
+    InterviewsController_void: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                interviewId: string;
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["VoidInterviewDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["VoidResultResponse"];
                 };
             };
         };

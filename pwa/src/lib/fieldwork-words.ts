@@ -1,5 +1,5 @@
 // Plain words for fieldwork values, shared by the interviewer's screens.
-import type { CellStatus, Disposition } from '../db/plumbline-db';
+import type { CellStatus, Disposition, HeadlineAnswer } from '../db/plumbline-db';
 
 export const dispositionWords: Record<Disposition, string> = {
   complete: 'Complete',
@@ -37,4 +37,21 @@ export function dispositionWord(value: unknown): string {
 export function variableWord(name: string): string {
   const words = name.replace(/[_-]+/g, ' ').trim();
   return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+/** The headline question's answers in the order they are offered. */
+export const headlineAnswerOrder: HeadlineAnswer[] = ['yes', 'no', 'dont_know', 'no_answer'];
+
+export const headlineAnswerWords: Record<HeadlineAnswer, string> = {
+  yes: 'Yes',
+  no: 'No',
+  dont_know: 'Don’t know',
+  no_answer: 'No answer',
+};
+
+/** An answer as stored on the device, older apps' true and false read as yes and no. */
+export function headlineAnswerOf(value: unknown): HeadlineAnswer | undefined {
+  if (value === true) return 'yes';
+  if (value === false) return 'no';
+  return typeof value === 'string' && value in headlineAnswerWords ? (value as HeadlineAnswer) : undefined;
 }

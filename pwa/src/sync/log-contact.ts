@@ -10,9 +10,11 @@ export type ContactDraft = Omit<InterviewRecord, 'id' | 'endedAt'>;
 
 export async function logContact(interviewerId: string, projectId: string, draft: ContactDraft): Promise<InterviewRecord> {
   const record: InterviewRecord = { id: uuidv4(), ...draft, endedAt: new Date().toISOString() };
-  if (record.disposition !== 'complete') {
+  // A complete carries every category and the answer; a partial or refusal may carry the
+  // categories the interviewer could see (for comparing nonresponse by cell); others neither.
+  if (record.disposition !== 'complete') delete record.headlineAnswer;
+  if (!['complete', 'partial', 'refusal'].includes(record.disposition) || Object.keys(record.categories ?? {}).length === 0) {
     delete record.categories;
-    delete record.headlineAnswer;
   }
   await addToOutbox(interviewerId, projectId, record);
   void syncNow();

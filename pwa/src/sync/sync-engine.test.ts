@@ -1,4 +1,4 @@
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { db, type InterviewRecord } from '../db/plumbline-db';
 import { installFakeApi, json, problem, type FakeApi } from '../test/fake-api';
 import { completeEntry, syncedBefore, tramCells, tramProject, tramVariables } from '../test/field-fixtures';
@@ -6,6 +6,7 @@ import { signedInAs } from '../test/render-app';
 import { requestSync, whenSyncIdle } from './sync-engine';
 import { readProgress, resetProgress } from './sync-progress';
 import { readReachability } from '../lib/reachability';
+import { changeUnsentAnswer, voidUnsentContact } from './void-contact';
 
 const me = 'user-interviewer';
 const who = { 'v-age': 'c-old', 'v-region': 'c-quay' };
@@ -178,5 +179,54 @@ describe('sync module', () => {
     } finally {
       Object.defineProperty(navigator, 'onLine', { configurable: true, get: () => true });
     }
+  });
+});
+
+describe('corrections while a batch is in flight', () => {
+  it('voids a waiting contact only after the batch carrying it is answered: then it is sent, not silently lost', async () => {
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    api.on('POST', `/api/projects/${tramProject.id}/interviews/sync`, async ({ body }) => {
+      const ids = (body as Batch).interviews.map((i) => i.id);
+      batches.push(ids);
+      await held;
+      return json({ results: ids.map((id) => ({ id, status: 'accepted' })), cells: freshCells });
+    });
+    await syncedBefore(me);
+    const entry = completeEntry(1, me, who);
+    await db.outbox.add(entry);
+    const sync = requestSync();
+    try {
+      await vi.waitFor(() => expect(batches).toHaveLength(1));
+    } catch (error) {
+      release();
+      throw error;
+    }
+    let voided: boolean | undefined;
+    const correction = voidUnsentContact(entry.clientId, me).then((v) => (voided = v));
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    expect(voided).toBeUndefined(); // waits for the batch
+    release();
+    await sync;
+    await correction;
+    // The server has it, so it is no longer waiting: the void on the device does nothing, and it is listed as sent (to void with a reason).
+    expect(voided).toBe(false);
+    expect(await db.outbox.count()).toBe(0);
+    expect((await db.sent.get(entry.clientId))?.record.id).toBe(entry.clientId);
+  });
+
+  it('changes a waiting answer when no batch is in flight, and the batch then carries the new answer', async () => {
+    serve();
+    await syncedBefore(me);
+    const entry = completeEntry(1, me, who);
+    await db.outbox.add(entry);
+    const sent: unknown[] = [];
+    api.on('POST', `/api/projects/${tramProject.id}/interviews/sync`, ({ body }) => {
+      sent.push(...(body as Batch).interviews);
+      return json({ results: (body as Batch).interviews.map((i) => ({ id: i.id, status: 'accepted' })), cells: freshCells });
+    });
+    expect(await changeUnsentAnswer(entry.clientId, me, 'no_answer')).toBe(true);
+    await requestSync();
+    expect(sent).toEqual([expect.objectContaining({ id: entry.clientId, headlineAnswer: 'no_answer' })]);
   });
 });

@@ -22,6 +22,24 @@ export type SyncOutcome = 'done' | 'skipped' | 'offline' | 'signed-out' | 'incom
 
 let running: Promise<SyncOutcome> | null = null;
 let again = false;
+/** A correction of the outbox in progress (whileSyncIdle): no sync starts until it is done. */
+let paused: Promise<unknown> | null = null;
+
+/**
+ * Runs a change to waiting outbox entries while no batch is in flight, and holds off any sync
+ * until it is done: an entry edited or voided on the device is never the one a batch already
+ * carries to the server with its old content.
+ */
+export async function whileSyncIdle<T>(change: () => Promise<T>): Promise<T> {
+  while (running || paused) await (running ?? paused);
+  const work = change();
+  paused = work.catch(() => undefined);
+  try {
+    return await work;
+  } finally {
+    paused = null;
+  }
+}
 
 /** Starts a sync, or, if one is running, makes sure another follows it. */
 export function requestSync(): Promise<SyncOutcome> {
@@ -33,6 +51,7 @@ export function requestSync(): Promise<SyncOutcome> {
     let outcome: SyncOutcome;
     do {
       again = false;
+      while (paused) await paused;
       outcome = await syncOnce();
     } while (again && outcome === 'done');
     return outcome;

@@ -1,5 +1,6 @@
 import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
 import { WITHHELD_FIGURES, type WithheldFigure, type WithheldFigureName } from '../../estimation/withheld.js';
+import type { OtherAnswerShare } from '../../estimation/weighting-summary.js';
 import type { Balance, BalanceMargin } from '../balance.service.js';
 
 // Shares are proportions (0–1) everywhere; docs/methods.md defines every figure.
@@ -23,18 +24,42 @@ export class BalanceMarginResponse implements BalanceMargin {
 
 const pair: ApiPropertyOptions = { type: [Number], minItems: 2, maxItems: 2, nullable: true };
 
-/** The headline share; the weighted figures are absent until weights can be computed. */
+/** Don't know or no answer, as a share of every counted complete (all are raked). */
+export class OtherAnswerResponse implements OtherAnswerShare {
+  @ApiProperty({ enum: ['dont_know', 'no_answer'], enumName: 'OtherAnswer' })
+  answer: 'dont_know' | 'no_answer';
+
+  @ApiProperty({ description: 'Counted completes giving this answer' })
+  count: number;
+
+  @ApiProperty({ description: 'Share of all counted completes used' })
+  unweighted: number;
+
+  @ApiProperty({ description: 'The same share after raking' })
+  weighted: number;
+}
+
+/**
+ * The headline share: yes among those who answered yes or no (a ratio); the weighted
+ * figures are absent until weights can be computed.
+ */
 export class BalanceOutcomeResponse {
   @ApiProperty({ example: 'headline' })
   column: string;
 
-  @ApiProperty()
+  @ApiProperty({ description: 'Share of yes among those who answered yes or no' })
   unweighted: number;
 
-  @ApiPropertyOptional()
+  @ApiProperty({ description: 'Counted completes that answered yes or no (the share\'s base)' })
+  answered: number;
+
+  @ApiPropertyOptional({ description: 'Share of yes among those who answered, after raking every complete' })
   weighted?: number;
 
-  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Standard error of the weighted share, linearised through the raking' })
+  @ApiPropertyOptional({ type: () => [OtherAnswerResponse], description: "Don't know and no answer, reported beside the share" })
+  otherAnswers?: OtherAnswerResponse[];
+
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'Standard error of the weighted share, a ratio estimator linearised through the raking' })
   standardError?: number | null;
 
   @ApiPropertyOptional({ ...pair, description: 'Korn–Graubard 95% interval [lower, upper] of the weighted share' })

@@ -2,6 +2,7 @@ import { ApiExtraModels, ApiProperty, getSchemaPath } from '@nestjs/swagger';
 import { CellResponse } from '../../quotas/dto/cells-response.dto.js';
 import { FLAG_CODES, type FlagCode } from '../flags.js';
 import type { SyncReply } from '../sync.service.js';
+import type { VoidResult } from '../void.service.js';
 
 export class AcceptedItemResponse {
   @ApiProperty({ type: String, format: 'uuid', nullable: true, description: 'The id sent, in lower case' })
@@ -28,6 +29,14 @@ export class DuplicateItemResponse {
   status: 'duplicate';
 }
 
+export class VoidedItemResponse {
+  @ApiProperty({ type: String, format: 'uuid', nullable: true, description: 'The voided interview' })
+  id: string | null;
+
+  @ApiProperty({ enum: ['voided'], description: 'A void item: the interview no longer counts; voiding it again answers duplicate' })
+  status: 'voided';
+}
+
 export class RejectedItemResponse {
   @ApiProperty({ type: String, nullable: true, description: 'The id sent, or null when it was unreadable' })
   id: string | null;
@@ -39,7 +48,7 @@ export class RejectedItemResponse {
   reason: string;
 }
 
-const itemResults = [AcceptedItemResponse, DuplicateItemResponse, RejectedItemResponse];
+const itemResults = [AcceptedItemResponse, DuplicateItemResponse, VoidedItemResponse, RejectedItemResponse];
 
 @ApiExtraModels(...itemResults)
 export class SyncReplyResponse implements SyncReply {
@@ -48,7 +57,7 @@ export class SyncReplyResponse implements SyncReply {
     items: { oneOf: itemResults.map((model) => ({ $ref: getSchemaPath(model) })) },
     description: 'One result per item, in the order sent',
   })
-  results: (AcceptedItemResponse | DuplicateItemResponse | RejectedItemResponse)[];
+  results: (AcceptedItemResponse | DuplicateItemResponse | VoidedItemResponse | RejectedItemResponse)[];
 
   @ApiProperty()
   accepted: number;
@@ -56,9 +65,20 @@ export class SyncReplyResponse implements SyncReply {
   @ApiProperty()
   duplicates: number;
 
+  @ApiProperty({ description: 'Void items that voided an interview' })
+  voided: number;
+
   @ApiProperty()
   rejected: number;
 
   @ApiProperty({ type: () => [CellResponse], description: "The project's cells after the batch" })
   cells: CellResponse[];
+}
+
+export class VoidResultResponse implements VoidResult {
+  @ApiProperty({ format: 'uuid' })
+  id: string;
+
+  @ApiProperty({ enum: ['voided', 'duplicate'], description: 'duplicate: it was already voided, nothing changed' })
+  status: 'voided' | 'duplicate';
 }

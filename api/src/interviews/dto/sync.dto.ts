@@ -1,12 +1,16 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsString, IsObject, IsOptional } from 'class-validator';
-import { DISPOSITIONS, type Disposition } from '../../database/tables.js';
+import { ArrayMaxSize, IsArray, IsIn, IsString, IsObject, IsOptional } from 'class-validator';
+import { DISPOSITIONS, HEADLINE_ANSWERS, type Disposition, type HeadlineAnswer } from '../../database/tables.js';
 
 export const SYNC_BATCH_LIMIT = 1000;
 
 /** The whole batch is checked only for its shape; each interview is checked on its own. */
 export class SyncBatchDto {
-  @ApiProperty({ type: 'array', items: { type: 'object' }, description: `Up to ${SYNC_BATCH_LIMIT} interviews` })
+  @ApiProperty({
+    type: 'array',
+    items: { type: 'object' },
+    description: `Up to ${SYNC_BATCH_LIMIT} items: new interviews (InterviewItemDto), or voids of interviews already sent ({ kind: "void", id, reason }: VoidItemDto)`,
+  })
   @IsArray({ message: 'interviews must be a list' })
   @ArrayMaxSize(SYNC_BATCH_LIMIT, { message: `interviews may hold at most ${SYNC_BATCH_LIMIT} items per batch` })
   interviews: unknown[];
@@ -26,10 +30,13 @@ export class InterviewItemDto {
   @IsObject({ message: 'categories must map variable ids to category ids' })
   categories?: Record<string, unknown>;
 
-  @ApiPropertyOptional({ description: 'Answer to the headline question; required for a complete' })
+  @ApiPropertyOptional({
+    oneOf: [{ type: 'string', enum: [...HEADLINE_ANSWERS] }, { type: 'boolean' }],
+    description: 'Answer to the headline question; required for a complete. true and false (from devices before don\'t know and no answer) are read as yes and no',
+  })
   @IsOptional()
-  @IsBoolean({ message: 'headlineAnswer must be true or false' })
-  headlineAnswer?: boolean;
+  @IsIn([...HEADLINE_ANSWERS, true, false], { message: `headlineAnswer must be one of ${HEADLINE_ANSWERS.join(', ')}` })
+  headlineAnswer?: HeadlineAnswer | boolean;
 
   // Read in full (RFC 3339, plausible year) by item-check.ts, which names what is wrong.
   @ApiProperty({ example: '2026-11-20T10:02:00Z', description: 'RFC 3339 date and time with Z or an offset' })

@@ -2,11 +2,50 @@ import { formatPercent } from '../../../lib/format';
 import type { Balance } from '../api/get-balance';
 import { biasSentence, formatBiasFactor } from './balance-words';
 
+type Outcome = NonNullable<Balance['outcome']>;
+
+const otherWords = { dont_know: 'Don’t know', no_answer: 'No answer' } as const;
+
+/** The share's base, and the answers outside it reported beside it (docs/methods.md, section 2). */
+function OtherAnswers({ outcome }: { outcome: Outcome }) {
+  const others = outcome.otherAnswers ?? [];
+  return (
+    <div className="pl-other-answers">
+      <p className="pl-small">
+        Shares of yes are among the {outcome.answered} {outcome.answered === 1 ? 'interview' : 'interviews'} that answered yes or no;
+        every complete is weighted.
+      </p>
+      {others.length ? (
+        <table className="pl-table pl-small" aria-label="Other answers to the headline question">
+          <thead>
+            <tr>
+              <th scope="col">Answer</th>
+              <th scope="col">Interviews</th>
+              <th scope="col">Unweighted</th>
+              <th scope="col">Weighted</th>
+            </tr>
+          </thead>
+          <tbody>
+            {others.map((o) => (
+              <tr key={o.answer}>
+                <th scope="row">{otherWords[o.answer]}</th>
+                <td>{o.count}</td>
+                <td>{formatPercent(o.unweighted)}</td>
+                <td>{formatPercent(o.weighted)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      ) : null}
+    </div>
+  );
+}
+
 /** The headline share before and after weighting, and how hard the sample's mix pulls it. */
 export function HeadlineShare({ balance }: { balance: Balance }) {
   const outcome = balance.outcome;
   if (!outcome) {
-    return <p className="pl-muted">The headline share appears with the first completed interviews.</p>;
+    return <p className="pl-muted">The headline share appears with the first completed interviews that answer yes or no.</p>;
   }
   const interval = outcome.impliedBiasFactorInterval ?? null;
   const b = outcome.impliedBiasFactor ?? null;
@@ -34,6 +73,7 @@ export function HeadlineShare({ balance }: { balance: Balance }) {
           </dd>
         </div>
       </dl>
+      <OtherAnswers outcome={outcome} />
       {interval && outcome.weighted !== undefined ? (
         <p className="pl-bias-sentence">{biasSentence(interval, outcome.unweighted, outcome.weighted)}</p>
       ) : null}

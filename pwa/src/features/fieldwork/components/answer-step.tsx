@@ -1,19 +1,18 @@
 import { RadioGroup } from '../../../components/radio-group';
+import type { HeadlineAnswer } from '../../../db/plumbline-db';
+import { headlineAnswerOrder, headlineAnswerWords } from '../../../lib/fieldwork-words';
 
 interface AnswerStepProps {
   question: string;
-  answer: boolean | undefined;
-  onAnswer: (answer: boolean) => void;
+  answer: HeadlineAnswer | undefined;
+  onAnswer: (answer: HeadlineAnswer) => void;
   onSave: () => void;
   saving: boolean;
 }
 
-const answers = [
-  { value: true, label: 'Yes', className: 'pl-answer' },
-  { value: false, label: 'No', className: 'pl-answer' },
-];
+const answers = headlineAnswerOrder.map((value) => ({ value, label: headlineAnswerWords[value], className: 'pl-answer' }));
 
-/** Last step of a complete: the headline question, answered yes or no. */
+/** Last step of a complete: the headline question, answered yes, no, don't know or no answer. */
 export function AnswerStep({ question, answer, onAnswer, onSave, saving }: AnswerStepProps) {
   return (
     <section aria-labelledby="pl-answer-title">

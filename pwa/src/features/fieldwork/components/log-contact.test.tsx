@@ -47,13 +47,15 @@ describe('logging a contact', () => {
     await user.click(within(dialog).getByRole('button', { name: 'Interview anyway' }));
 
     expect(screen.getByText('Do you support extending the tram line?')).toBeInTheDocument();
+    const answers = screen.getByRole('radiogroup', { name: 'Do you support extending the tram line?' });
+    expect(within(answers).getAllByRole('radio').map((r) => r.textContent)).toEqual(['Yes', 'No', 'Don’t know', 'No answer']);
     await user.click(screen.getByRole('radio', { name: 'Yes' }));
     await user.click(screen.getByRole('button', { name: 'Save interview' }));
 
     expect(await screen.findByText(/Complete saved on this device/)).toBeInTheDocument();
     const [entry] = await db.outbox.toArray();
     const record = entry!.payload as InterviewRecord;
-    expect(record).toMatchObject({ disposition: 'complete', categories: { 'v-age': 'c-young', 'v-region': 'c-mardon' }, headlineAnswer: true });
+    expect(record).toMatchObject({ disposition: 'complete', categories: { 'v-age': 'c-young', 'v-region': 'c-mardon' }, headlineAnswer: 'yes' });
     expect(record.id).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
     expect(Date.parse(record.endedAt)).toBeGreaterThanOrEqual(Date.parse(record.startedAt));
     expect(Object.keys(record).sort()).toEqual(['categories', 'disposition', 'endedAt', 'headlineAnswer', 'id', 'startedAt']);
@@ -95,6 +97,25 @@ describe('logging a contact', () => {
     expect(Object.keys(entry!.payload as object).sort()).toEqual(['disposition', 'endedAt', 'id', 'startedAt']);
     expect(entry!.interviewerId).toBe(me);
   });
+
+  it('records the categories seen at a partial, if the interviewer gives any, and no answer', async () => {
+    await syncedBefore(me);
+    const user = userEvent.setup();
+    renderApp('/interviewer');
+    await user.click(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' }));
+    await user.click(screen.getByRole('button', { name: 'Partial' }));
+    expect(screen.getByRole('group', { name: 'What could you see? (optional)' })).toBeInTheDocument();
+    await user.click(within(screen.getByRole('radiogroup', { name: 'Age band' })).getByRole('radio', { name: '35+' }));
+    // Tapping a chosen category again clears it: the interviewer was not sure after all.
+    await user.click(within(screen.getByRole('radiogroup', { name: 'Region' })).getByRole('radio', { name: 'Mardon' }));
+    await user.click(within(screen.getByRole('radiogroup', { name: 'Region' })).getByRole('radio', { name: 'Mardon' }));
+    await user.click(screen.getByRole('button', { name: 'Save partial' }));
+
+    expect(await screen.findByText(/Partial saved on this device/)).toBeInTheDocument();
+    const [entry] = await db.outbox.toArray();
+    expect(entry!.payload).toMatchObject({ disposition: 'partial', categories: { 'v-age': 'c-old' } });
+    expect(Object.keys(entry!.payload as object).sort()).toEqual(['categories', 'disposition', 'endedAt', 'id', 'startedAt']);
+  });
 });
 
 describe('a contact left half logged', () => {
@@ -103,7 +124,7 @@ describe('a contact left half logged', () => {
     const user = await startComplete('35+', 'Old Quay');
     await user.click(screen.getByRole('button', { name: 'Start the interview' }));
     await user.click(screen.getByRole('radio', { name: 'No' }));
-    await vi.waitFor(async () => expect((await db.drafts.get(me))?.headlineAnswer).toBe(false));
+    await vi.waitFor(async () => expect((await db.drafts.get(me))?.headlineAnswer).toBe('no'));
     const startedAt = (await db.drafts.get(me))!.startedAt;
 
     // A reload or a crash: everything on screen goes, the device's storage stays.
@@ -115,7 +136,7 @@ describe('a contact left half logged', () => {
     await user.click(screen.getByRole('button', { name: 'Save interview' }));
     expect(await screen.findByText(/Complete saved on this device/)).toBeInTheDocument();
     const [entry] = await db.outbox.toArray();
-    expect(entry!.payload).toMatchObject({ categories: { 'v-age': 'c-old', 'v-region': 'c-quay' }, headlineAnswer: false, startedAt });
+    expect(entry!.payload).toMatchObject({ categories: { 'v-age': 'c-old', 'v-region': 'c-quay' }, headlineAnswer: 'no', startedAt });
     expect(await db.drafts.count()).toBe(0);
   });
 

@@ -5,8 +5,8 @@
 // draft on the device (db/draft-store), so a reload or crash resumes where it stopped.
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { discardDraft, saveDraft } from '../../../db/draft-store';
-import type { ContactDraft, Disposition, DraftStep, FieldProject } from '../../../db/plumbline-db';
-import { dispositionWords } from '../../../lib/fieldwork-words';
+import type { ContactDraft, Disposition, DraftStep, FieldProject, HeadlineAnswer } from '../../../db/plumbline-db';
+import { dispositionWords, headlineAnswerOf } from '../../../lib/fieldwork-words';
 import { respondentCells } from '../../../sync/cell-status';
 import { logContact } from '../../../sync/log-contact';
 import type { ProjectCellStatus } from '../hooks/use-field-status';
@@ -14,9 +14,13 @@ import { AnswerStep } from './answer-step';
 import { AssignedCellsNote } from './assigned-cells-note';
 import { CategoriesStep } from './categories-step';
 import { CellCheckStep } from './cell-check-step';
+import { ObservedCategories } from './observed-categories';
 import { OutcomeStep } from './outcome-step';
 import { FormProblem } from '../../../components/form-problem';
 import { stepAnnouncement } from './log-steps';
+
+/** Outcomes where the interviewer met someone and may record the categories they could see. */
+const OBSERVABLE = new Set<Disposition>(['partial', 'refusal']);
 
 interface LogContactProps {
   userId: string;
@@ -34,7 +38,7 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
   const [step, setStep] = useState<DraftStep>(draft?.step ?? 'outcome');
   const [disposition, setDisposition] = useState<Disposition>(draft?.disposition ?? 'complete');
   const [categories, setCategories] = useState<Record<string, string>>(draft?.categories ?? {});
-  const [answer, setAnswer] = useState<boolean | undefined>(draft?.headlineAnswer);
+  const [answer, setAnswer] = useState<HeadlineAnswer | undefined>(headlineAnswerOf(draft?.headlineAnswer));
   const [saving, setSaving] = useState(false);
   const [problem, setProblem] = useState<string>();
   const variables = status?.variables ?? [];
@@ -83,6 +87,7 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
         disposition: chosen,
         startedAt,
         ...(chosen === 'complete' ? { categories, headlineAnswer: answer } : {}),
+        ...(OBSERVABLE.has(chosen) && Object.keys(categories).length > 0 ? { categories } : {}),
       });
       onSaved(`${dispositionWords[chosen]} saved on this device.`, startedAt);
     } catch (error) {
@@ -119,6 +124,15 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
           <h2 id="pl-confirm-title" className="pl-step-title" tabIndex={-1}>
             {dispositionWords[disposition]}
           </h2>
+          {OBSERVABLE.has(disposition) && variables.length > 0 ? (
+            <ObservedCategories
+              variables={variables}
+              chosen={categories}
+              onChange={(variableId, categoryId) =>
+                setCategories(({ [variableId]: _old, ...rest }) => (categoryId ? { ...rest, [variableId]: categoryId } : rest))
+              }
+            />
+          ) : null}
           <div className="pl-step-actions">
             <button type="button" className="pl-button pl-button-main pl-button-wide" disabled={saving} onClick={() => void save(disposition)}>
               Save {dispositionWords[disposition].toLowerCase()}

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Dialog } from '../../../components/dialog';
 import { discardRejected } from '../../../db/outbox-store';
-import type { InterviewRecord, OutboxEntry } from '../../../db/plumbline-db';
+import { isVoidRecord, type InterviewRecord, type OutboxEntry } from '../../../db/plumbline-db';
 import { dispositionWord } from '../../../lib/fieldwork-words';
 import { formatMoment } from '../../../lib/format';
 
@@ -27,7 +27,7 @@ export function RefusedList({ entries, projectNames, userId }: RefusedListProps)
           return (
             <li key={entry.clientId} className="pl-entry is-refused">
               <span className="pl-entry-time pl-figure">{formatMoment(record?.endedAt ?? entry.createdAt)}</span>
-              <span className="pl-entry-what">{dispositionWord(record?.disposition)}</span>
+              <span className="pl-entry-what">{isVoidRecord(entry.payload) ? 'Void of a sent contact' : dispositionWord(record?.disposition)}</span>
               <span className="pl-entry-project pl-muted pl-small">{projectNames.get(entry.projectId) ?? 'Project not on this device'}</span>
               <span className="pl-entry-reason">Reason: {entry.rejectedReason}</span>
               <button type="button" className="pl-button pl-button-quiet pl-entry-discard" onClick={() => setDiscarding(entry)}>

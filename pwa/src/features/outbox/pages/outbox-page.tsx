@@ -4,7 +4,7 @@ import '../outbox.css';
 import { PageFrame } from '../../../components/page-frame';
 import { LoadingPanel } from '../../../components/state-panels';
 import { useCachedProjects, useLastSync } from '../../../db/cache-store';
-import { isRejected, useOthersCount, useOwnEntries } from '../../../db/outbox-store';
+import { isRejected, useOthersCount, useOwnEntries, useSentEntries } from '../../../db/outbox-store';
 import { useStoredSession } from '../../../db/session-store';
 import { useOnline } from '../../../hooks/use-online';
 import { formatCount } from '../../../lib/format';
@@ -12,18 +12,20 @@ import { useBackgroundSync } from '../../../sync/use-background-sync';
 import { EntryList } from '../components/entry-list';
 import { RefusedList } from '../components/refused-list';
 import { SendPanel } from '../components/send-panel';
+import { SentList } from '../components/sent-list';
 
 export function OutboxPage() {
   useBackgroundSync();
   const session = useStoredSession();
   const userId = session?.user.id;
   const entries = useOwnEntries(userId);
+  const sent = useSentEntries(userId);
   const others = useOthersCount(userId);
   const projects = useCachedProjects(userId);
   const lastSync = useLastSync(userId);
   const online = useOnline();
 
-  const loaded = userId && entries && others !== undefined && projects && lastSync !== undefined;
+  const loaded = userId && entries && sent && others !== undefined && projects && lastSync !== undefined;
   const waiting = entries?.filter((e) => !isRejected(e)) ?? [];
   const refused = entries?.filter(isRejected) ?? [];
   const names = new Map((projects ?? []).map((p) => [p.id, p.name]));
@@ -51,11 +53,12 @@ export function OutboxPage() {
             <SendPanel waiting={waiting.length} lastSync={lastSync} />
           </section>
           {waiting.length > 0 ? (
-            <EntryList entries={waiting} projectNames={names} />
+            <EntryList entries={waiting} projectNames={names} userId={userId} />
           ) : (
             <p className="pl-muted pl-outbox-empty">Nothing is waiting to be sent.</p>
           )}
           <RefusedList entries={refused} projectNames={names} userId={userId} />
+          <SentList entries={sent} projectNames={names} userId={userId} />
           {others > 0 ? (
             <p className="pl-muted pl-small">
               {formatCount(others)} more {others === 1 ? 'contact was' : 'contacts were'} logged on this device by someone

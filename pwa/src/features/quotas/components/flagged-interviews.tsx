@@ -1,4 +1,5 @@
-import { formatCount } from '../../../lib/format';
+import { formatCount, formatMoment } from '../../../lib/format';
+import { dispositionWord } from '../../../lib/fieldwork-words';
 import { useFlaggedInterviews } from '../api/get-flagged-interviews';
 import { ScrollBox } from '../../../components/scroll-box';
 
@@ -21,7 +22,7 @@ export function FlaggedInterviewsSection({ projectId }: { projectId: string }) {
       ) : (
         <>
           <p className="pl-small pl-muted">
-            Kept and counted, but worth a look: <span className="pl-figure">{formatCount(data.total)}</span>{' '}
+            Kept, but worth a look: <span className="pl-figure">{formatCount(data.total)}</span>{' '}
             {data.total === 1 ? 'interview' : 'interviews'} in all.
           </p>
           <ScrollBox label="Flagged interviews, scrolls sideways">
@@ -42,6 +43,23 @@ export function FlaggedInterviewsSection({ projectId }: { projectId: string }) {
               </tbody>
             </table>
           </ScrollBox>
+          {data.voided.length ? (
+            <>
+              <h3 className="pl-variable-name">Voided, with the reason given</h3>
+              <ul className="pl-entry-list" aria-label="Voided interviews">
+                {data.voided.map((v) => (
+                  <li key={v.id} className="pl-entry">
+                    <span className="pl-entry-time pl-figure">{formatMoment(v.voidedAt)}</span>
+                    <span className="pl-entry-what">
+                      {dispositionWord(v.disposition)} by {v.interviewer}, {v.fieldDay}
+                      {v.voidedBy === v.interviewer ? '' : `; voided by ${v.voidedBy}`}
+                    </span>
+                    <span className="pl-entry-reason">Reason: {v.reason}</span>
+                  </li>
+                ))}
+              </ul>
+            </>
+          ) : null}
         </>
       )}
     </section>

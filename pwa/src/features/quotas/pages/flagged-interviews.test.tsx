@@ -29,7 +29,12 @@ describe('flagged interviews on the quota board', () => {
         byReason: [
           { code: 'project_closed', reason: 'Sent after the project was closed', count: 9 },
           { code: 'outside_field_dates', reason: 'Ended more than a day outside the field dates', count: 6 },
+          { code: 'voided', reason: 'Voided after it was sent (no longer counted); the reason is kept with it', count: 1 },
         ],
+        voided: [{
+          id: 'i1', disposition: 'complete', fieldDay: '2026-11-20', interviewer: 'Ada Quill', voidedBy: 'Ada Quill',
+          voidedAt: '2026-11-20T12:00:00Z', reason: 'Logged twice by mistake',
+        }],
       }),
     );
     await signedInAs('supervisor');
@@ -39,11 +44,15 @@ describe('flagged interviews on the quota board', () => {
     expect(within(table).getByRole('row', { name: /Sent after the project was closed/ })).toHaveTextContent('9');
     expect(within(table).getByRole('row', { name: /outside the field dates/ })).toHaveTextContent('6');
     expect(screen.getByText(/interviews in all/)).toHaveTextContent('14 interviews in all');
+    // A voided interview is listed with who logged it and the reason they gave.
+    const voided = screen.getByRole('list', { name: 'Voided interviews' });
+    expect(within(voided).getByRole('listitem')).toHaveTextContent('Complete by Ada Quill, 2026-11-20');
+    expect(within(voided).getByRole('listitem')).toHaveTextContent('Reason: Logged twice by mistake');
     expect(screen.getByRole('table', { name: 'Cells' })).toBeInTheDocument();
   });
 
   it('says so when nothing is flagged, and keeps the cells when the flags cannot be loaded', async () => {
-    serve(() => json({ total: 0, byReason: [] }));
+    serve(() => json({ total: 0, byReason: [], voided: [] }));
     await signedInAs('supervisor');
     const { unmount } = renderApp('/supervisor');
     expect(await screen.findByText('No interviews are flagged.')).toBeInTheDocument();
