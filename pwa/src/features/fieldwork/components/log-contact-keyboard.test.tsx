@@ -88,15 +88,15 @@ describe('logging a contact from the keyboard', () => {
     const answers = within(screen.getByRole('radiogroup', { name: 'Do you support extending the tram line?' })).getAllByRole('radio');
     await user.tab();
     expect(answers[0]).toHaveFocus();
-    await user.keyboard('{ArrowLeft}');
+    await user.keyboard('{ArrowRight}');
     expect(answers[1]).toBeChecked();
     expect(answers[1]).toHaveAccessibleName('No');
     // The chosen answer is the group's one tab stop.
-    expect(answers.map((answer) => answer.tabIndex)).toEqual([-1, 0]);
+    expect(answers.map((answer) => answer.tabIndex)).toEqual([-1, 0, -1, -1]);
 
     await user.click(screen.getByRole('button', { name: 'Save interview' }));
     expect(await screen.findByText(/Complete saved on this device/)).toBeInTheDocument();
     const [entry] = await db.outbox.toArray();
-    expect(entry!.payload).toMatchObject({ categories: { 'v-age': 'c-old', 'v-region': 'c-mardon' }, headlineAnswer: false });
+    expect(entry!.payload).toMatchObject({ categories: { 'v-age': 'c-old', 'v-region': 'c-mardon' }, headlineAnswer: 'no' });
   });
 });

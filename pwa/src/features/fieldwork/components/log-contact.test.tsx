@@ -103,7 +103,7 @@ describe('logging a contact', () => {
     const user = userEvent.setup();
     renderApp('/interviewer');
     await user.click(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' }));
-    await user.click(screen.getByRole('button', { name: 'Partial' }));
+    await user.click(screen.getByRole('radio', { name: 'Partial' }));
     expect(screen.getByRole('group', { name: 'What could you see? (optional)' })).toBeInTheDocument();
     await user.click(within(screen.getByRole('radiogroup', { name: 'Age band' })).getByRole('radio', { name: '35+' }));
     // Tapping a chosen category again clears it: the interviewer was not sure after all.

@@ -68,7 +68,7 @@ describe('Today: the interviewer’s own progress, offline', () => {
     const user = userEvent.setup();
     renderApp('/interviewer');
     await user.click(await screen.findByRole('button', { name: 'Log a contact for Vellmoor tram extension' }));
-    await user.click(screen.getByRole('button', { name: 'Complete' }));
+    await user.click(screen.getByRole('radio', { name: 'Complete' }));
     await user.click(within(screen.getByRole('radiogroup', { name: 'Age band' })).getByRole('radio', { name: '35+' }));
     await user.click(within(screen.getByRole('radiogroup', { name: 'Region' })).getByRole('radio', { name: 'Mardon' }));
     await user.click(screen.getByRole('button', { name: 'Check their cells' }));
