@@ -92,7 +92,10 @@ describe('targets edited mid-field', () => {
 
     const balance = (await p.lead.get(`${base}/balance`)).body;
     expect(balance.notWeighted).toBe(2);
-    expect(balance.retired).toEqual([{ id: old.variables[2]!.categories[2]!.id, variable: 'Region of residence', category: 'Coast', interviews: 2, mergedInto: null, mergedIntoLabel: null }]);
+    expect(balance.retired).toEqual([{
+      id: old.variables[2]!.categories[2]!.id, variable: 'Region of residence', category: 'Coast', interviews: 2, mergedInto: null, mergedIntoLabel: null,
+      choices: [{ id: old.variables[2]!.categories[0]!.id, label: 'Northside' }, { id: old.variables[2]!.categories[1]!.id, label: 'South' }],
+    }]);
     expect(balance.n).toBe(4);
   });
 

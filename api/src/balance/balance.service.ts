@@ -31,6 +31,8 @@ export interface RetiredCategory {
   mergedInto: string | null;
   /** That category's label; null when not merged. */
   mergedIntoLabel: string | null;
+  /** The current categories of the same variable it may be merged into. */
+  choices: { id: string; label: string }[];
 }
 
 export interface Balance {
@@ -115,7 +117,8 @@ export class BalanceService {
     }
     const retired = [...inRetired].map(([id, interviews]) => {
       const m = meaning.get(id)!;
-      return { id, variable: m.variable, category: m.label, interviews, mergedInto: m.countsAs, mergedIntoLabel: m.countsAs ? (labelOf.get(m.countsAs)?.label ?? null) : null };
+      const choices = (variables.find((v) => v.id === m.variableId)?.categories ?? []).map((c) => ({ id: c.id, label: c.label }));
+      return { id, variable: m.variable, category: m.label, interviews, mergedInto: m.countsAs, mergedIntoLabel: m.countsAs ? (labelOf.get(m.countsAs)?.label ?? null) : null, choices };
     });
     const targets: MarginTarget[] = variables.map((v) => ({
       variable: v.name,

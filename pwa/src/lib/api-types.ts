@@ -766,6 +766,12 @@ export interface components {
             /** @example plumbline-demo */
             password: string;
         };
+        MergeChoiceResponse: {
+            /** Format: uuid */
+            id: string;
+            /** @example Harbourside */
+            label: string;
+        };
         MergeRetiredDto: {
             /**
              * Format: uuid
@@ -935,6 +941,8 @@ export interface components {
              * @example Harbour
              */
             category: string;
+            /** @description The current categories of the same variable it may be merged into */
+            choices: components["schemas"]["MergeChoiceResponse"][];
             /** Format: uuid */
             id: string;
             /** @description Counted interviews logged in it */
@@ -1178,6 +1186,7 @@ export type JointShareResponse = components['schemas']['JointShareResponse'];
 export type LinkDetailsResponse = components['schemas']['LinkDetailsResponse'];
 export type LinkTokenDto = components['schemas']['LinkTokenDto'];
 export type LoginDto = components['schemas']['LoginDto'];
+export type MergeChoiceResponse = components['schemas']['MergeChoiceResponse'];
 export type MergeRetiredDto = components['schemas']['MergeRetiredDto'];
 export type MessageResponse = components['schemas']['MessageResponse'];
 export type OrganisationRefResponse = components['schemas']['OrganisationRefResponse'];

@@ -21,6 +21,14 @@ export class BalanceMarginResponse implements BalanceMargin {
   weighted: number | null;
 }
 
+export class MergeChoiceResponse {
+  @ApiProperty({ format: 'uuid' })
+  id: string;
+
+  @ApiProperty({ example: 'Harbourside' })
+  label: string;
+}
+
 export class RetiredCategoryResponse implements RetiredCategory {
   @ApiProperty({ format: 'uuid' })
   id: string;
@@ -39,6 +47,9 @@ export class RetiredCategoryResponse implements RetiredCategory {
 
   @ApiProperty({ type: String, nullable: true, example: 'Harbourside' })
   mergedIntoLabel: string | null;
+
+  @ApiProperty({ type: () => [MergeChoiceResponse], description: 'The current categories of the same variable it may be merged into' })
+  choices: MergeChoiceResponse[];
 }
 
 const pair: ApiPropertyOptions = { type: [Number], minItems: 2, maxItems: 2, nullable: true };
