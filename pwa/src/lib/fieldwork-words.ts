@@ -32,9 +32,3 @@ export const cellStatusWords: Record<CellStatus, string> = {
 export function dispositionWord(value: unknown): string {
   return typeof value === 'string' && value in dispositionWords ? dispositionWords[value as Disposition] : 'Unknown outcome';
 }
-
-/** "age_band" → "Age band". */
-export function variableWord(name: string): string {
-  const words = name.replace(/[_-]+/g, ' ').trim();
-  return words.charAt(0).toUpperCase() + words.slice(1);
-}

@@ -36,6 +36,7 @@ export function RetiredCategories({ projectId, balance, editable }: { projectId:
               <label className="pl-inline-field">
                 <span>Count as</span>
                 <select
+                  aria-label={`Count ${r.variable}: ${r.category} as`}
                   className="pl-input"
                   value={r.mergedInto ?? ''}
                   disabled={merge.isPending}

@@ -31,7 +31,7 @@ describe('retired categories on the balance', () => {
 
     const section = await screen.findByRole('region', { name: 'Retired categories' });
     expect(section).toHaveTextContent('7 interviews in retired categories are not weighted: District: Harbour.');
-    await userEvent.setup().selectOptions(screen.getByLabelText('Count as'), 'Harbourside');
+    await userEvent.setup().selectOptions(await screen.findByLabelText('Count District: Harbour as'), 'Harbourside');
 
     expect(await screen.findByText('Every interview in a retired category is counted as a current category of its variable.')).toBeInTheDocument();
     expect(api.calls.find((c) => c.method === 'PUT')?.body).toEqual({ mergedInto: 'c-side' });

@@ -1,5 +1,4 @@
 import type { QuotaVariable } from '../../../db/plumbline-db';
-import { variableWord } from '../../../lib/fieldwork-words';
 
 interface CategoriesStepProps {
   variables: QuotaVariable[];
@@ -19,7 +18,7 @@ export function CategoriesStep({ variables, chosen, onChange, onNext }: Categori
       {variables.map((variable) => (
         <div key={variable.id} className="pl-variable">
           <h3 id={`pl-var-${variable.id}`} className="pl-variable-name">
-            {variableWord(variable.name)}
+            {variable.name}
           </h3>
           <div role="radiogroup" aria-labelledby={`pl-var-${variable.id}`} className="pl-category-grid">
             {variable.categories.map((category) => {
