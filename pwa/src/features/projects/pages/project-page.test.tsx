@@ -95,6 +95,8 @@ describe('quota targets from a CSV file', () => {
 
     const cells = await screen.findByRole('table', { name: 'Cell targets' });
     expect(within(cells).getByRole('row', { name: /18-34 × sex: female/ })).toHaveTextContent('61');
+    // The same words as the interviewer's cells page (pwa/src/lib/glossary.ts).
+    expect(within(cells).getByRole('row', { name: /18-34 × sex: female/ })).toHaveTextContent('Interlocked cell');
     const put = api.calls.find((c) => c.method === 'PUT');
     expect(put?.body).toEqual({
       variables: [
