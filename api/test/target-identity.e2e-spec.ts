@@ -80,10 +80,13 @@ describe('targets edited mid-field', () => {
 
   it('retires a removed category: its interviews kept, a late complete accepted and flagged', async () => {
     const variables = await saved();
-    const region = variables.find((v) => v.columnName === 'region')!;
-    region.categories = region.categories.filter((c) => c.label !== 'Coast');
+    const edited = variables.find((v) => v.columnName === 'region')!;
+    edited.categories = edited.categories.filter((c) => c.label !== 'Coast');
     expect((await p.lead.put(`${base}/targets`, asSent(variables))).status).toBe(200);
-    expect((await saved()).find((v) => v.columnName === 'region')!.categories.map((c) => c.label)).toEqual(['Northside', 'South']);
+    const region = (await saved()).find((v) => v.columnName === 'region')!;
+    expect(region.categories.map((c) => c.label)).toEqual(['Northside', 'South']);
+    // The variable still holds the interviews of its retired category.
+    expect(region.interviews).toBe(5);
 
     const [late] = await send(complete(respondent('Coast')));
     expect(late).toMatchObject({ status: 'accepted', flags: ['retired_category'] });

@@ -48,11 +48,15 @@ export class TargetsService {
     const interlocked = active.some((v) => v.interlocked);
     const counts = await this.db('interview_counts').where({ project_id: projectId }).where('n', '>', 0).select('category_ids', 'n');
     const held = (id: string) => counts.reduce((s, g) => s + (g.category_ids.includes(id) ? g.n : 0), 0);
+    // A variable holds the interviews of its retired categories too.
+    const variableOf = new Map((await this.db('quota_categories').where({ project_id: projectId }).select('id', 'variable_id')).map((c) => [c.id, c.variable_id]));
+    const heldByVariable = (id: string) => counts.reduce((s, g) => s + (g.category_ids.some((c) => variableOf.get(c) === id) ? g.n : 0), 0);
     return {
-      variables: variableViews(active).map((v) => {
-        const categories = v.categories.map((c) => ({ ...c, interviews: held(c.id) }));
-        return { ...v, categories, interviews: categories.reduce((s, c) => s + c.interviews, 0) };
-      }),
+      variables: variableViews(active).map((v) => ({
+        ...v,
+        categories: v.categories.map((c) => ({ ...c, interviews: held(c.id) })),
+        interviews: heldByVariable(v.id),
+      })),
       jointShares: joint ? joint.shares.map((s) => ({ categories: s.category.split(JOINT_SEPARATOR), share: s.share })) : [],
       interlockBasis: !interlocked ? null : joint ? 'joint shares' : 'product of margins',
     };
