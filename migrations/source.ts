@@ -14,6 +14,7 @@ import * as m0009 from './20261202000900_over_quota_cells.js';
 import * as m0010 from './20261202001000_sessions.js';
 import * as m0011 from './20261202001010_sign_in_failures.js';
 import * as m0020 from './20261202002000_accounts.js';
+import * as m0030 from './20261202003000_quota_identity.js';
 import * as m0400 from './20261202004000_headline_answers.js';
 import * as m0410 from './20261202004100_interview_voids.js';
 import * as m0051 from './20261202005100_assignments_and_archive.js';
@@ -31,6 +32,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202001000_sessions': m0010,
   '20261202001010_sign_in_failures': m0011,
   '20261202002000_accounts': m0020,
+  '20261202003000_quota_identity': m0030,
   '20261202004000_headline_answers': m0400,
   '20261202004100_interview_voids': m0410,
   '20261202005100_assignments_and_archive': m0051,

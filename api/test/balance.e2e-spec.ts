@@ -67,8 +67,8 @@ describe('live balance', () => {
     expect(exported.status).toBe(200);
     expect(exported.headers['content-type']).toMatch(/^text\/csv/);
     writeFileSync(join(dir, 'data.csv'), exported.text);
-    const targets: { variables: { name: string; categories: { label: string; share: number }[] }[] } = (await lead.get(`${base}/targets`)).body;
-    const targetsCsv = ['variable,category,share', ...targets.variables.flatMap((v) => v.categories.map((c) => `${v.name},${c.label},${c.share}`))].join('\n');
+    const targets: { variables: { columnName: string; categories: { label: string; share: number }[] }[] } = (await lead.get(`${base}/targets`)).body;
+    const targetsCsv = ['variable,category,share', ...targets.variables.flatMap((v) => v.categories.map((c) => `${v.columnName},${c.label},${c.share}`))].join('\n');
     writeFileSync(join(dir, 'targets.csv'), `${targetsCsv}\n`);
     // The source under test, not a build that may be older than it.
     const source = resolve(import.meta.dirname, '../src/cli/main.ts');

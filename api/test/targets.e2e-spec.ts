@@ -16,6 +16,11 @@ beforeAll(async () => {
 });
 afterAll(() => h.close());
 
+type Parsed = { id?: string; categories: { id?: string }[] }[];
+/** What a file reads as, leaving out the saved ids it is matched to. */
+const withoutIds = (variables: Parsed) =>
+  variables.map(({ id: _v, ...v }) => ({ ...v, categories: v.categories.map(({ id: _c, ...c }) => c) }));
+
 type Cell = { kind: string; label: string; target: number; categoryIds: string[] };
 
 describe('project set-up', () => {
@@ -118,10 +123,12 @@ describe('targets and cells', () => {
     const before = (await lead.get(`${projectPath}/targets`)).body;
     const res = await lead.upload(`${projectPath}/targets/parse`, csv, 'targets.csv', { interlock: 'age,sex' });
     expect(res.status).toBe(200);
-    expect(res.body.variables).toEqual([
-      { name: 'age', interlocked: true, categories: [{ label: '18-34', share: 0.3 }, { label: '35+', share: 0.7 }] },
-      { name: 'sex', interlocked: true, categories: [{ label: 'female', share: 52 }, { label: 'male', share: 48 }] },
+    expect(withoutIds(res.body.variables)).toEqual([
+      { name: 'age', columnName: 'age', interlocked: true, categories: [{ label: '18-34', share: 0.3 }, { label: '35+', share: 0.7 }] },
+      { name: 'sex', columnName: 'sex', interlocked: true, categories: [{ label: 'female', share: 52 }, { label: 'male', share: 48 }] },
     ]);
+    // Variables and categories already saved come back with their ids, so saving keeps them.
+    expect(res.body.variables[0].id).toBe(before.variables[0].id);
     expect((await lead.get(`${projectPath}/targets`)).body).toEqual(before);
   });
 
@@ -230,7 +237,7 @@ describe('joint shares of interlocked variables', () => {
     expect(res.status).toBe(200);
     expect(res.body.variables.map((v: { name: string; interlocked: boolean }) => [v.name, v.interlocked])).toEqual([['age', true], ['sex', true], ['region', false]]);
     // Shares come back as proportions of the table.
-    expect(res.body.variables[1].categories).toEqual([{ label: 'female', share: expect.closeTo(0.52, 12) }, { label: 'male', share: expect.closeTo(0.48, 12) }]);
+    expect(withoutIds(res.body.variables)[1]!.categories).toEqual([{ label: 'female', share: expect.closeTo(0.52, 12) }, { label: 'male', share: expect.closeTo(0.48, 12) }]);
     expect(res.body.jointShares).toHaveLength(6);
     expect(res.body.jointShares[1]).toEqual({ categories: ['18-34', 'male'], share: expect.closeTo(0.16, 12) });
   });

@@ -82,7 +82,7 @@ describe('interviewer offline at phone size', () => {
     const supervisor = await tokenFor(baseUrl, 'supervisor@vellmoor.example');
     const projectId = await vellmoorId(baseUrl, supervisor.token);
     const board = await api<Board>(baseUrl, supervisor.token, `/projects/${projectId}/quota-board`);
-    const cell = board.cells.find((c) => c.label === 'age band: 18-24 × sex: female')!;
+    const cell = board.cells.find((c) => c.label === 'Age band: 18-24 × Sex: female')!;
     await api(baseUrl, supervisor.token, `/projects/${projectId}/cells/${cell.id}/close`, 'POST');
     try {
       browser = await openBrowser(PHONE);
@@ -92,7 +92,7 @@ describe('interviewer offline at phone size', () => {
       await screenshot(page, 'interviewer-6-today-closed-cell');
       await page.getByRole('link', { name: 'Cells', exact: true }).click();
       await page.getByRole('heading', { level: 1, name: 'Today' }).waitFor({ state: 'hidden' });
-      const closedRow = page.getByRole('region', { name: 'Crossed cells' }).getByRole('listitem').filter({ hasText: '18-24 × sex: female' });
+      const closedRow = page.getByRole('region', { name: 'Interlocked cells' }).getByRole('listitem').filter({ hasText: '18-24 × Sex: female' });
       expect(await closedRow.textContent()).toContain('Closed');
       await screenshot(page, 'interviewer-6-cells-page');
       await page.getByRole('link', { name: 'Today', exact: true }).click();
@@ -101,7 +101,7 @@ describe('interviewer offline at phone size', () => {
       await logComplete(page, { 'Age band': '18-24', Sex: 'female', Region: 'Harrowby', Education: 'degree' }, 'No');
       const warning = page.getByRole('dialog', { name: 'Their cell is closed' });
       await warning.waitFor();
-      expect(await warning.textContent()).toContain('age band: 18-24 × sex: female is closed');
+      expect(await warning.textContent()).toContain('Age band: 18-24 × Sex: female is closed');
       expect(await page.getByRole('alert').first().textContent()).toContain('full or closed');
       await screenshot(page, 'interviewer-7-closed-cell-warning');
       await warning.getByRole('button', { name: 'Interview anyway' }).click();

@@ -32,7 +32,7 @@ function figure(page: Page, group: string, term: string) {
   return page.locator(`dl[aria-label="${group}"] > div`, { has: page.locator('dt', { hasText: term }) }).locator('dd');
 }
 
-const cellLabel = 'age band: 18-24 × sex: female';
+const cellLabel = 'Age band: 18-24 × Sex: female';
 
 describe("supervisor's quota board", () => {
   it('shows the seeded cells on a phone and closes and reopens a cell after confirmation', async () => {
@@ -44,7 +44,7 @@ describe("supervisor's quota board", () => {
     await list.waitFor();
     const board = await apiAs<{ cells: { label: string }[] }>('supervisor@vellmoor.example', `/projects/${await tramProjectId()}/quota-board`);
     expect(await list.getByRole('listitem').count()).toBe(board.cells.length);
-    await list.getByText('region: Harrowby').waitFor();
+    await list.getByText('Region: Harrowby').waitFor();
     await screenshot(page, 'phone-supervisor-board');
 
     await page.getByRole('button', { name: `Close cell ${cellLabel}` }).click();

@@ -1,7 +1,7 @@
 // The live balance of a project: counted interviews per combination of categories and
 // headline answer come from interview_counts (kept in SQL by triggers), and the
 // estimation core rakes those groups to the population targets. No interview is loaded.
-import { Inject, Injectable } from '@nestjs/common';
+import { BadRequestException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
 import type { ProjectRow } from '../database/tables.js';
@@ -10,6 +10,7 @@ import type { MarginTarget } from '../estimation/raking.js';
 import { summariseWeighting, type OutcomeRakingCell, type OutcomeSummary } from '../estimation/weighting-summary.js';
 import type { WithheldFigure } from '../estimation/withheld.js';
 import { loadActiveTargets, loadJointTable } from '../quotas/cell-allocator.js';
+import { loadCategoryMap } from '../quotas/category-map.js';
 
 export interface BalanceMargin {
   variable: string;
@@ -19,6 +20,21 @@ export interface BalanceMargin {
   weighted: number | null;
 }
 
+/** A category the office retired that holds interviews, and what weighting does with them. */
+export interface RetiredCategory {
+  id: string;
+  variable: string;
+  category: string;
+  /** Counted interviews logged in it. */
+  interviews: number;
+  /** The current category of the same variable its interviews count as; null when they are not weighted. */
+  mergedInto: string | null;
+  /** That category's label; null when not merged. */
+  mergedIntoLabel: string | null;
+  /** The current categories of the same variable it may be merged into. */
+  choices: { id: string; label: string }[];
+}
+
 export interface Balance {
   projectId: string;
   headlineQuestion: string;
@@ -26,6 +42,10 @@ export interface Balance {
   n: number;
   /** Completes left out because they lack a category of a variable added later. */
   excluded: number;
+  /** Completes left out because they were logged in a retired category not merged into a current one. */
+  notWeighted: number;
+  /** Retired categories of current variables that hold interviews. */
+  retired: RetiredCategory[];
   converged: boolean | null;
   iterations: number | null;
   designEffect: number | null;
@@ -43,9 +63,27 @@ export interface Balance {
   computedAt: string;
 }
 
+function invalid(message: string, field: string): BadRequestException {
+  return new BadRequestException({ message, fields: [{ field, message }] });
+}
+
 @Injectable()
 export class BalanceService {
   constructor(@Inject(KNEX) private readonly db: Knex) {}
+
+  /** Merges a retired category's interviews into a current category of the same variable for weighting, or (null) undoes it. */
+  async mergeRetired(projectId: string, categoryId: string, mergedInto: string | null): Promise<void> {
+    const category = await this.db('quota_categories').where({ project_id: projectId, id: categoryId }).first();
+    if (!category) throw new NotFoundException('No such category in this project');
+    if (!category.retired) throw invalid('this category is current; only a retired category can be merged into another', 'categoryId');
+    if (mergedInto !== null) {
+      const into = await this.db('quota_categories').where({ project_id: projectId, id: mergedInto }).first();
+      if (!into || into.retired || into.variable_id !== category.variable_id) {
+        throw invalid('mergedInto must be a current category of the same variable', 'mergedInto');
+      }
+    }
+    await this.db('quota_categories').where({ id: categoryId }).update({ merged_into: mergedInto });
+  }
 
   async balance(project: ProjectRow): Promise<Balance> {
     const { variables } = await loadActiveTargets(this.db, project.id);
@@ -56,17 +94,33 @@ export class BalanceService {
 
     const labelOf = new Map<string, { variable: string; label: string }>();
     for (const v of variables) for (const c of v.categories) labelOf.set(c.id, { variable: v.name, label: c.label });
+    // Interviews are read through what each category counts as today (category-map.ts).
+    const meaning = await loadCategoryMap(this.db, project.id);
+    const activeVariables = new Set(variables.map((v) => v.id));
+    const inRetired = new Map<string, number>();
     const cells: OutcomeRakingCell[] = [];
     let excluded = 0;
+    let notWeighted = 0;
     for (const g of groups) {
       const categories: Record<string, string> = {};
+      let unmerged = false;
       for (const id of g.category_ids) {
-        const known = labelOf.get(id);
+        const m = meaning.get(id);
+        if (!m || !activeVariables.has(m.variableId)) continue;
+        if (m.retired) inRetired.set(id, (inRetired.get(id) ?? 0) + g.n);
+        const known = m.countsAs ? labelOf.get(m.countsAs) : undefined;
         if (known) categories[known.variable] = known.label;
+        else unmerged = true;
       }
-      if (Object.keys(categories).length < variables.length) excluded += g.n;
+      if (unmerged) notWeighted += g.n;
+      else if (Object.keys(categories).length < variables.length) excluded += g.n;
       else cells.push({ categories, count: g.n, successes: g.yes, answered: g.n - g.dont_know - g.no_answer, dontKnow: g.dont_know });
     }
+    const retired = [...inRetired].map(([id, interviews]) => {
+      const m = meaning.get(id)!;
+      const choices = (variables.find((v) => v.id === m.variableId)?.categories ?? []).map((c) => ({ id: c.id, label: c.label }));
+      return { id, variable: m.variable, category: m.label, interviews, mergedInto: m.countsAs, mergedIntoLabel: m.countsAs ? (labelOf.get(m.countsAs)?.label ?? null) : null, choices };
+    });
     const targets: MarginTarget[] = variables.map((v) => ({
       variable: v.name,
       shares: v.categories.map((c) => ({ category: c.label, share: c.share })),
@@ -83,6 +137,8 @@ export class BalanceService {
       headlineQuestion: project.headline_question,
       n,
       excluded,
+      notWeighted,
+      retired,
       converged: null,
       iterations: null,
       designEffect: null,

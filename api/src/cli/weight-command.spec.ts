@@ -37,6 +37,20 @@ beforeEach(() => {
 });
 
 describe('plumbline weight', () => {
+  it('reads what an export says each interview counts as, leaving out those a retired category keeps out of weighting', () => {
+    // As the export writes it: "Old Quay" retired; interview 6 merged into Mardon, interview 7 not weighted.
+    const data = 'id,age,region,region_counted_as,supports\n1,young,Harrowby,Harrowby,1\n2,old,Harrowby,Harrowby,0\n3,old,Mardon,Mardon,1\n' +
+      '4,young,Mardon,Mardon,0\n5,old,Mardon,Mardon,0\n6,old,Old Quay,Mardon,1\n7,young,Old Quay,,1\n';
+    const result = weigh(data, TARGETS, '--outcome', 'supports');
+    expect(result.code).toBe(0);
+    const report = JSON.parse(result.stdout);
+    expect(report).toMatchObject({ n: 6, notWeighted: 1 });
+    expect(report.margins.find((m: { category: string }) => m.category === 'Mardon').unweighted).toBeCloseTo(4 / 6, 12);
+    const rows = readFileSync(path('out.csv'), 'utf8').trim().split('\n').slice(1).map((r) => r.split(','));
+    expect(rows[6]![5]).toBe('');
+    expect(rows.slice(0, 6).every((r) => Number(r[5]) > 0)).toBe(true);
+  });
+
   it('writes every input column in order plus a weight column with mean 1, and reports the balance', () => {
     const result = weigh(DATA, TARGETS, '--outcome', 'supports');
     expect(result.code).toBe(0);

@@ -13,8 +13,10 @@ export const WEIGHT_USAGE =
 
 interface Cells {
   cells: (RakingCell & { successes: number; answered: number; dontKnow: number })[];
-  /** Cell index of each data record. */
+  /** Cell index of each data record; -1 for a record left out (see countedAs). */
   cellOf: Int32Array;
+  /** Records left out because their `<variable>_counted_as` is empty (a retired category not weighted). */
+  notWeighted: number;
 }
 
 /**
@@ -27,6 +29,13 @@ const OUTCOME_VALUES: Record<string, 'yes' | 'no' | 'dont_know' | 'no_answer'> =
   dont_know: 'dont_know', "don't know": 'dont_know', no_answer: 'no_answer', 'no answer': 'no_answer',
 };
 const OUTCOME_EXPECTED = '1 or yes, 0 or no, dont_know or no_answer';
+
+/**
+ * The column a variable is read from: `<variable>_counted_as` when the data has it (an export
+ * of a project with retired categories says there what each interview counts as, as the
+ * balance does), otherwise the variable's own column.
+ */
+export const countedAs = (variable: string) => `${variable}_counted_as`;
 
 /** Rakes a data file to the targets file and writes it back with a weight column. */
 export function weightCommand(args: string[]): object {
@@ -50,7 +59,7 @@ export function weightCommand(args: string[]): object {
   const targets = readTargets(required(values.targets, 'targets'));
   const data = readCsv(required(values.data, 'data'));
   checkColumns(data, targets, values.outcome, values['base-weight']);
-  const { cells, cellOf } = buildCells(data, targets, values.outcome, values['base-weight']);
+  const { cells, cellOf, notWeighted } = buildCells(data, targets, values.outcome, values['base-weight']);
   checkTargetsHaveRespondents(targets, cells, data.file);
 
   let summary;
@@ -61,7 +70,7 @@ export function weightCommand(args: string[]): object {
     throw error;
   }
   const weights = summary.weights;
-  const weightOf = (i: number) => weights[cellOf[i] as number] as number;
+  const weightOf = (i: number) => (cellOf[i] === -1 ? '' : (weights[cellOf[i] as number] as number));
   if (data.rawLines) {
     // No quoted fields: each input line is written back unchanged with its weight appended.
     const { header, records } = data.rawLines;
@@ -69,7 +78,8 @@ export function weightCommand(args: string[]): object {
   } else {
     writeCsvAtomic(out, [...data.header, 'weight'], Array.from({ length: data.rowCount }, (_, i) => [...data.row(i), weightOf(i)]));
   }
-  const { weights: _weights, outcome, ...report } = summary;
+  const { weights: _weights, outcome, ...summaryReport } = summary;
+  const report = notWeighted > 0 ? { ...summaryReport, notWeighted } : summaryReport;
   return outcome ? { ...report, outcome: { column: values.outcome, ...outcome } } : report;
 }
 
@@ -97,7 +107,7 @@ function checkColumns(data: CsvTable, targets: TargetsFile, outcome?: string, ba
  */
 function buildCells(data: CsvTable, targets: TargetsFile, outcome?: string, baseWeight?: string): Cells {
   const variables = targets.margins.map((t) => ({ name: t.variable, index: new Map(t.shares.map((s, i) => [s.category, i])) }));
-  const columns = targets.margins.map((t) => data.header.indexOf(t.variable));
+  const columns = targets.margins.map((t) => (data.header.includes(countedAs(t.variable)) ? data.header.indexOf(countedAs(t.variable)) : data.header.indexOf(t.variable)));
   const outcomeAt = outcome === undefined ? -1 : columns.push(data.header.indexOf(outcome)) - 1;
   const baseAt = baseWeight === undefined ? -1 : columns.push(data.header.indexOf(baseWeight)) - 1;
   const combinations = variables.reduce((p, v) => p * v.index.size, 1);
@@ -106,8 +116,15 @@ function buildCells(data: CsvTable, targets: TargetsFile, outcome?: string, base
   const cells: Cells['cells'] = [];
   const cellOf = new Int32Array(data.rowCount);
   const values: string[] = new Array(columns.length).fill('');
+  const fromCountedAs = targets.margins.map((t) => data.header.includes(countedAs(t.variable)));
+  let notWeighted = 0;
   for (let i = 0; i < data.rowCount; i++) {
     data.pick(i, columns, values);
+    if (variables.some((_, x) => fromCountedAs[x] && (values[x] as string).trim() === '')) {
+      cellOf[i] = -1;
+      notWeighted++;
+      continue;
+    }
     let key = 0;
     variables.forEach((v, x) => {
       const value = (values[x] as string).trim();
@@ -155,7 +172,7 @@ function buildCells(data: CsvTable, targets: TargetsFile, outcome?: string, base
     if (answer === 'dont_know') cell.dontKnow++;
     cellOf[i] = j;
   }
-  return { cells, cellOf };
+  return { cells, cellOf, notWeighted };
 }
 
 function checkTargetsHaveRespondents(targets: TargetsFile, cells: Cells['cells'], dataFile: string): void {

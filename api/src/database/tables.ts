@@ -73,7 +73,10 @@ export interface ProjectRow {
 export interface QuotaVariableRow {
   id: string;
   project_id: string;
+  /** Display name: what screens show ("Age band"). */
   name: string;
+  /** File column name (snake_case): targets files, exports, the command line ("age_band"). */
+  column_name: string;
   position: number;
   interlocked: boolean;
   retired: boolean;
@@ -87,6 +90,8 @@ export interface QuotaCategoryRow {
   position: number;
   share: number;
   retired: boolean;
+  /** A retired category whose interviews weighting counts in this current category; null when excluded. */
+  merged_into: string | null;
 }
 
 /** Joint population share of one combination of the interlocked variables' categories. */

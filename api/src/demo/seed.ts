@@ -35,7 +35,8 @@ export const DEMO_USERS: { email: string; name: string; role: Role }[] = [
 ];
 
 /** The scenario's column-style names as a lead would type them in the project ("age band"). */
-const shownAs = (name: string) => name.replace(/_/g, ' ');
+/** The name screens show for a scenario column ("age_band" → "Age band"); the column stays the file name. */
+const shownAs = (name: string) => name.charAt(0).toUpperCase() + name.slice(1).replace(/_/g, ' ');
 
 const DAY = 86_400_000;
 const isoDay = (t: number) => new Date(t).toISOString().slice(0, 10);
@@ -77,6 +78,7 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
   await new TargetsService(db, new CellAllocator(db), cells).save(project.id, {
     variables: Object.entries(VELLMOOR_TARGETS).map(([name, shares]) => ({
       name: shownAs(name),
+      columnName: name,
       interlocked: name === 'age_band' || name === 'sex',
       categories: Object.entries(shares).map(([label, share]) => ({ label, share })),
     })),

@@ -6,6 +6,8 @@ export const FLAG_REASONS = {
   project_closed: 'Sent after the project was closed',
   outside_field_dates: 'Ended more than a day outside the field dates',
   voided: 'Voided after it was sent (no longer counted); the reason is kept with it',
+  retired_category: 'Logged in a category the office removed from the targets meanwhile; kept, and weighted only if the lead merges that category into a current one',
+  retired_variable: 'Logged with a quota variable the office removed from the targets meanwhile; kept, that answer is not used for quotas or weighting',
 } as const;
 
 export type FlagCode = keyof typeof FLAG_REASONS;

@@ -134,9 +134,12 @@ describe('anything at all', () => {
 });
 
 describe('categories against the project’s targets', () => {
+  const category = (id: string, variable: string, label: string, retired = false) =>
+    ({ id, variable_id: variable, project_id: 'p', label, position: 0, share: 1, retired, merged_into: null });
   const targets: ActiveTargets = {
     variables: [
-      { id: 'v-age', name: 'age', project_id: 'p', position: 0, interlocked: false, retired: false, categories: [{ id: 'c-young', variable_id: 'v-age', project_id: 'p', label: '18-34', position: 0, share: 1, retired: false }] },
+      { id: 'v-age', name: 'age', column_name: 'age', project_id: 'p', position: 0, interlocked: false, retired: false, categories: [category('c-young', 'v-age', '18-34'), category('c-old', 'v-age', '65+', true)] },
+      { id: 'v-tenure', name: 'tenure', column_name: 'tenure', project_id: 'p', position: 1, interlocked: false, retired: true, categories: [category('c-owner', 'v-tenure', 'owner', true)] },
     ],
   };
   const item = (over: Partial<CheckedItem>): CheckedItem => ({
@@ -144,17 +147,23 @@ describe('categories against the project’s targets', () => {
   });
 
   it('gives the category ids, and plain reasons without raw ids', () => {
-    expect(checkCategories(item({}), targets)).toEqual(['c-young']);
-    expect(checkCategories(item({ categories: { 'v-age': 'C-YOUNG' } }), targets)).toEqual(['c-young']);
+    expect(checkCategories(item({}), targets)).toEqual({ ids: ['c-young'], flags: [] });
+    expect(checkCategories(item({ categories: { 'v-age': 'C-YOUNG' } }), targets)).toEqual({ ids: ['c-young'], flags: [] });
     expect(checkCategories(item({ categories: { 'v-age': { toString: 1 } } }), targets)).toEqual({ reason: 'age: unknown category' });
     expect(checkCategories(item({ categories: { 'v-region': 'c-north' } }), targets)).toEqual({ reason: 'names a quota variable this project does not have' });
     expect(checkCategories(item({ categories: {} }), targets)).toEqual({ reason: 'age: no category given' });
     expect(checkCategories(item({ headlineAnswer: undefined }), targets)).toEqual({ reason: 'headlineAnswer is missing' });
-    expect(checkCategories(item({ disposition: 'refusal', categories: {}, headlineAnswer: undefined }), targets)).toEqual([]);
+    expect(checkCategories(item({ disposition: 'refusal', categories: {}, headlineAnswer: undefined }), targets)).toEqual({ ids: [], flags: [] });
+  });
+
+  it('accepts a category or variable retired while the device was out, flagged, and needs no retired variable', () => {
+    expect(checkCategories(item({ categories: { 'v-age': 'c-old' } }), targets)).toEqual({ ids: ['c-old'], flags: ['retired_category'] });
+    expect(checkCategories(item({ categories: { 'v-age': 'c-young', 'v-tenure': 'c-owner' } }), targets)).toEqual({ ids: ['c-young', 'c-owner'], flags: ['retired_variable'] });
+    expect(checkCategories(item({ categories: { 'v-age': 'c-owner' } }), targets)).toEqual({ reason: 'age: unknown category' });
   });
 
   it('refuses a complete for a project that has no targets, but keeps a refusal', () => {
     expect(checkCategories(item({ categories: {} }), { variables: [] })).toEqual({ reason: 'the project has no quota targets yet, so a complete cannot be counted' });
-    expect(checkCategories(item({ disposition: 'refusal', categories: {} }), { variables: [] })).toEqual([]);
+    expect(checkCategories(item({ disposition: 'refusal', categories: {} }), { variables: [] })).toEqual({ ids: [], flags: [] });
   });
 });

@@ -6,6 +6,7 @@ import { validateSync, type ValidationError } from 'class-validator';
 import type { Disposition, HeadlineAnswer } from '../database/tables.js';
 import type { ActiveTargets } from '../quotas/cell-allocator.js';
 import { InterviewItemDto } from './dto/sync.dto.js';
+import type { FlagCode } from './flags.js';
 
 /** An interview that passed every check that does not depend on the project. */
 export interface CheckedItem {
@@ -108,28 +109,41 @@ export function checkItem(raw: unknown): ItemCheck {
   }
 }
 
+/** The categories an interview is stored with, and the flags its retired ones earn. */
+export interface CheckedCategories {
+  ids: string[];
+  flags: FlagCode[];
+}
+
 /**
- * The project-dependent check: category ids of the interview, one per active variable in
- * variable order (a complete needs every one), or the reason it cannot be stored.
+ * The project-dependent check: category ids of the interview, one per variable it names
+ * (a complete needs one of every active variable), or the reason it cannot be stored.
+ * `targets` holds every variable and category the project ever had (loadAllTargets): an id
+ * the office retired while the device was out is accepted and flagged, never refused; only an
+ * id that was never part of the project is.
  */
-export function checkCategories(item: CheckedItem, targets: ActiveTargets): string[] | { reason: string } {
+export function checkCategories(item: CheckedItem, targets: ActiveTargets): CheckedCategories | { reason: string } {
   const complete = item.disposition === 'complete';
-  if (complete && targets.variables.length === 0) {
+  const active = targets.variables.filter((v) => !v.retired);
+  if (complete && active.length === 0) {
     return { reason: 'the project has no quota targets yet, so a complete cannot be counted' };
   }
   const known = new Set(targets.variables.map((v) => v.id));
   if (Object.keys(item.categories).some((k) => !known.has(k))) return { reason: 'names a quota variable this project does not have' };
   const ids: string[] = [];
+  const flags = new Set<FlagCode>();
   for (const v of targets.variables) {
     const value = Object.hasOwn(item.categories, v.id) ? item.categories[v.id] : undefined;
     if (value === undefined || value === null) {
-      if (complete) return { reason: `${v.name}: no category given` };
+      if (complete && !v.retired) return { reason: `${v.name}: no category given` };
       continue;
     }
     const category = typeof value === 'string' ? v.categories.find((c) => c.id === value.toLowerCase()) : undefined;
     if (!category) return { reason: `${v.name}: unknown category` };
+    if (v.retired) flags.add('retired_variable');
+    else if (category.retired) flags.add('retired_category');
     ids.push(category.id);
   }
   if (complete && item.headlineAnswer === undefined) return { reason: 'headlineAnswer is missing' };
-  return ids;
+  return { ids, flags: [...flags] };
 }

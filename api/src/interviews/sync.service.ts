@@ -13,7 +13,7 @@ import { KNEX } from '../database/database.constants.js';
 import { isDatabaseUnavailable } from '../common/database-unavailable.js';
 import type { ProjectRow } from '../database/tables.js';
 import { ProjectAccess } from '../projects/project-access.service.js';
-import { loadActiveTargets, type ActiveTargets } from '../quotas/cell-allocator.js';
+import { loadAllTargets, type ActiveTargets } from '../quotas/cell-allocator.js';
 import { CellsService, withCounts, type CellView } from '../quotas/cells.service.js';
 import { flagsOnArrival, type FlagCode } from './flags.js';
 import { insertAll, insertGuarded, type NewInterview } from './guarded-insert.js';
@@ -51,6 +51,7 @@ interface ReadBeforeLock {
   checked: ReturnType<typeof checkItem>[];
   /** Void items by their place in the batch (their `checked` entry is a stand-in). */
   voids: Map<number, VoidCheck>;
+  /** Every variable and category the project ever had (retired ones too). */
   targets: ActiveTargets;
   /** Ids of the batch already stored, with whose they are. */
   known: Map<string, { id: string; project_id: string; interviewer_id: string }>;
@@ -82,7 +83,7 @@ export class SyncService {
     // office changing something while the device was out, which never refuses an interview.
     const ids = [...new Set(checked.flatMap((c) => (c.ok ? [c.item.id] : [])))];
     const [targets, existing] = await Promise.all([
-      loadActiveTargets(this.db, projectId),
+      loadAllTargets(this.db, projectId),
       ids.length ? this.db('interviews').whereIn('id', ids).select('id', 'project_id', 'interviewer_id') : Promise.resolve([]),
     ]);
     const known = new Map(existing.map((r) => [r.id, r]));
@@ -129,8 +130,9 @@ export class SyncService {
         repeats.set(index, first.index);
         return { id: item.id, status: 'duplicate' };
       }
-      const categories = checkCategories(item, targets);
-      if (!Array.isArray(categories)) return { id: item.id, status: 'rejected', reason: categories.reason };
+      const checkedCategories = checkCategories(item, targets);
+      if ('reason' in checkedCategories) return { id: item.id, status: 'rejected', reason: checkedCategories.reason };
+      const categories = checkedCategories.ids;
       firstCopy.set(item.id, { index, fingerprint: fingerprint(item) });
       let fullCells: string[] = [];
       if (counted({ disposition: item.disposition })) {
@@ -140,7 +142,7 @@ export class SyncService {
       }
       const overQuota = fullCells.length > 0;
       const day = fieldDay(item.endedAt);
-      const flags = flagsOnArrival(flagContext, day);
+      const flags = [...flagsOnArrival(flagContext, day), ...checkedCategories.flags];
       rows.push({
         id: item.id,
         project_id: project.id,

@@ -27,7 +27,7 @@ export async function copyProject(trx: Knex.Transaction, source: ProjectRow, cel
   const variables = await trx('quota_variables').where({ project_id: source.id, retired: false }).orderBy('position');
   for (const v of variables) {
     const [variable] = await trx('quota_variables')
-      .insert({ project_id: target.id, name: v.name, position: v.position, interlocked: v.interlocked, retired: false })
+      .insert({ project_id: target.id, name: v.name, column_name: v.column_name, position: v.position, interlocked: v.interlocked, retired: false })
       .returning('id');
     const categories = await trx('quota_categories').where({ variable_id: v.id, retired: false }).orderBy('position');
     if (categories.length === 0) continue;

@@ -21,6 +21,15 @@ export async function loadActiveTargets(db: Knex, projectId: string): Promise<Ac
   };
 }
 
+/** Every variable and category the project ever had, retired ones included (sync reads devices' old ids with them). */
+export async function loadAllTargets(db: Knex, projectId: string): Promise<ActiveTargets> {
+  const variables = await db('quota_variables').where({ project_id: projectId }).orderBy([{ column: 'retired' }, { column: 'position' }]);
+  const categories = await db('quota_categories').where({ project_id: projectId }).orderBy([{ column: 'retired' }, { column: 'position' }]);
+  return {
+    variables: variables.map((v) => ({ ...v, categories: categories.filter((c) => c.variable_id === v.id) })),
+  };
+}
+
 /**
  * The project's joint table of its interlocked variables as a raking target ("age band × sex",
  * categories "18-24 × female"), or null when the cells use the product of the margins.
@@ -43,7 +52,10 @@ export async function loadJointTable(db: Knex, projectId: string, variables: Act
 /** The active variables and categories as the API shows them (targets and cells alike). */
 export interface VariableView {
   id: string;
+  /** Display name: what screens show. */
   name: string;
+  /** Column name in targets files, exports and the command line. */
+  columnName: string;
   interlocked: boolean;
   categories: { id: string; label: string; share: number }[];
 }
@@ -57,6 +69,7 @@ export function variableViews(variables: ActiveTargets['variables']): VariableVi
   return variables.map((v) => ({
     id: v.id,
     name: v.name,
+    columnName: v.column_name,
     interlocked: v.interlocked,
     categories: v.categories.map((c) => ({ id: c.id, label: c.label, share: c.share })),
   }));

@@ -63,7 +63,7 @@ export class QuotasController {
     @Body('interlock') interlock: unknown,
   ) {
     await this.access.find(user, projectId);
-    return this.targets.parseUpload(file, typeof interlock === 'string' ? interlock : '');
+    return this.targets.parseUpload(projectId, file, typeof interlock === 'string' ? interlock : '');
   }
 
   @Get('cells')

@@ -1,100 +1,33 @@
 // A project's quota variables and population shares. Saving replaces them as a whole
 // in one transaction and recomputes the cells; interviews already logged are kept, and
 // categories that disappear are retired rather than deleted so old interviews still read.
-import { BadRequestException, Inject, Injectable } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
 import { parseTargetsCsv, TargetsFormatError } from '../formats/targets-csv.js';
 import { EstimationInputError } from '../estimation/errors.js';
 import { JOINT_SEPARATOR } from '../estimation/joint-names.js';
 import { resolveTargets } from '../estimation/joint-targets.js';
-import type { MarginTarget } from '../estimation/raking.js';
-import { CellAllocator, loadActiveTargets, loadJointTable, variableViews, type VariableView } from './cell-allocator.js';
+import { CellAllocator, loadActiveTargets, loadJointTable, variableViews, type ActiveTargets, type VariableView } from './cell-allocator.js';
 import { CellsService, type CellView } from './cells.service.js';
 import { SaveTargetsDto } from './dto/targets.dto.js';
 import { validateAs } from '../common/validation.js';
 import { atLine } from './targets-file-lines.js';
+import { checkTargets, columnNameOf, invalid, jointMargins } from './targets-check.js';
+import { writeTargets } from './targets-save.js';
+
+/** A variable as the set-up screen edits it: with the counted interviews it and each category hold. */
+export interface TargetVariableView extends VariableView {
+  interviews: number;
+  categories: (VariableView['categories'][number] & { interviews: number })[];
+}
 
 export interface TargetsView {
-  variables: VariableView[];
+  variables: TargetVariableView[];
   /** Joint shares of the interlocked variables (labels in the variables' order); empty when not given. */
   jointShares: { categories: string[]; share: number }[];
   /** Where the interlocked cells' targets come from; null when nothing is interlocked. */
   interlockBasis: 'joint shares' | 'product of margins' | null;
-}
-
-/** The most cells an interlocked cross may have: more cannot be filled by a field team. */
-const MAX_CROSSED_CELLS = 2000;
-
-function invalid(message: string, field = 'variables'): BadRequestException {
-  return new BadRequestException({ message, fields: [{ field, message }] });
-}
-
-export function checkTargets(dto: SaveTargetsDto): void {
-  const names = new Set<string>();
-  dto.variables.forEach((v, i) => {
-    const name = v.name.trim();
-    if (names.has(name.toLowerCase())) throw invalid(`variable ${name} is given twice`, `variables.${i}.name`);
-    names.add(name.toLowerCase());
-    const labels = new Set<string>();
-    v.categories.forEach((c, j) => {
-      const label = c.label.trim();
-      if (labels.has(label.toLowerCase())) {
-        throw invalid(`variable ${name}: category "${label}" is given twice`, `variables.${i}.categories.${j}.label`);
-      }
-      labels.add(label.toLowerCase());
-    });
-    if (v.categories.every((c) => c.share === 0)) throw invalid(`variable ${name}: all shares are zero`, `variables.${i}.categories`);
-  });
-  const interlocked = dto.variables.filter((v) => v.interlocked);
-  if (interlocked.length === 1) throw invalid('choose at least two variables to interlock, or none');
-  const crossed = interlocked.reduce((n, v) => n * v.categories.length, 1);
-  if (crossed > MAX_CROSSED_CELLS) {
-    throw invalid(`interlocking ${interlocked.map((v) => v.name).join(' × ')} gives ${crossed} cells; at most ${MAX_CROSSED_CELLS} are allowed`);
-  }
-  jointMargins(dto);
-}
-
-/**
- * The interlocked variables' margins summed from the joint shares, after checking the table
- * (every combination once, labels of the interlocked variables, margins given alongside within
- * 0.5 points: joint-targets.ts); null when the targets have no joint shares.
- */
-export function jointMargins(dto: SaveTargetsDto): Map<string, Map<string, number>> | null {
-  if (!dto.jointShares || dto.jointShares.length === 0) return null;
-  const interlocked = dto.variables.filter((v) => v.interlocked);
-  if (interlocked.length < 2) throw invalid('joint shares need at least two interlocked variables; interlock them, or leave out the joint shares', 'jointShares');
-  const names = interlocked.map((v) => v.name.trim());
-  const labelsOf = interlocked.map((v) => new Set(v.categories.map((c) => c.label.trim())));
-  dto.jointShares.forEach((row, i) => {
-    if (row.categories.length !== interlocked.length) {
-      throw invalid(`joint share ${i + 1}: name one category of each of ${names.join(', ')}`, `jointShares.${i}.categories`);
-    }
-    row.categories.forEach((label, v) => {
-      if (!labelsOf[v]?.has(label.trim())) {
-        throw invalid(`joint share ${i + 1}: "${label.trim()}" is not a category of ${names[v]}`, `jointShares.${i}.categories`);
-      }
-    });
-  });
-  for (const [v, labels] of labelsOf.entries()) {
-    const clash = [...labels].find((l) => l.includes(JOINT_SEPARATOR.trim()));
-    if (clash) throw invalid(`${names[v]}: category "${clash}" contains "${JOINT_SEPARATOR.trim()}", which joint shares use between categories; rename it`, 'jointShares');
-  }
-  const joint: MarginTarget = {
-    variable: names.join(JOINT_SEPARATOR),
-    shares: dto.jointShares.map((row) => ({ category: row.categories.map((c) => c.trim()).join(JOINT_SEPARATOR), share: row.share })),
-  };
-  const margins: MarginTarget[] = interlocked.map((v) => ({
-    variable: v.name.trim(),
-    shares: v.categories.map((c) => ({ category: c.label.trim(), share: c.share })),
-  }));
-  try {
-    const resolved = resolveTargets([joint, ...margins]);
-    return new Map(resolved.margins.map((m) => [m.variable, new Map(m.shares.map((s) => [s.category, s.share]))]));
-  } catch (error) {
-    if (error instanceof EstimationInputError) throw invalid(`joint shares: ${error.message}`, 'jointShares');
-    throw error;
-  }
 }
 
 /** Interlocked variables keep the joint table's order ahead of the rest; the rest keep theirs. */
@@ -115,8 +48,17 @@ export class TargetsService {
     const { variables: active } = await loadActiveTargets(this.db, projectId);
     const joint = await loadJointTable(this.db, projectId, active);
     const interlocked = active.some((v) => v.interlocked);
+    const counts = await this.db('interview_counts').where({ project_id: projectId }).where('n', '>', 0).select('category_ids', 'n');
+    const held = (id: string) => counts.reduce((s, g) => s + (g.category_ids.includes(id) ? g.n : 0), 0);
+    // A variable holds the interviews of its retired categories too.
+    const variableOf = new Map((await this.db('quota_categories').where({ project_id: projectId }).select('id', 'variable_id')).map((c) => [c.id, c.variable_id]));
+    const heldByVariable = (id: string) => counts.reduce((s, g) => s + (g.category_ids.some((c) => variableOf.get(c) === id) ? g.n : 0), 0);
     return {
-      variables: variableViews(active),
+      variables: variableViews(active).map((v) => ({
+        ...v,
+        categories: v.categories.map((c) => ({ ...c, interviews: held(c.id) })),
+        interviews: heldByVariable(v.id),
+      })),
       jointShares: joint ? joint.shares.map((s) => ({ categories: s.category.split(JOINT_SEPARATOR), share: s.share })) : [],
       interlockBasis: !interlocked ? null : joint ? 'joint shares' : 'product of margins',
     };
@@ -152,32 +94,7 @@ export class TargetsService {
     const fromJoint = jointMargins(dto);
     // One writer per project at a time: syncs and target edits queue behind each other.
     await trx('projects').where({ id: projectId }).forUpdate().first('id');
-    await trx('quota_variables').where({ project_id: projectId }).update({ retired: true });
-    await trx('quota_categories').where({ project_id: projectId }).update({ retired: true });
-    for (const [position, v] of dto.variables.entries()) {
-      const [variable] = await trx('quota_variables')
-        .insert({ project_id: projectId, name: v.name.trim(), position, interlocked: Boolean(v.interlocked), retired: false })
-        .onConflict(['project_id', 'name'])
-        .merge(['position', 'interlocked', 'retired'])
-        .returning('*');
-      // An interlocked variable with joint shares takes its margin from the table.
-      const joint = fromJoint?.get(v.name.trim());
-      const shareOf = (c: { label: string; share: number }) => joint?.get(c.label.trim()) ?? c.share;
-      const total = v.categories.reduce((s, c) => s + shareOf(c), 0);
-      await trx('quota_categories')
-        .insert(
-          v.categories.map((c, i) => ({
-            variable_id: variable!.id,
-            project_id: projectId,
-            label: c.label.trim(),
-            position: i,
-            share: shareOf(c) / total,
-            retired: false,
-          })),
-        )
-        .onConflict(['variable_id', 'label'])
-        .merge(['position', 'share', 'retired']);
-    }
+    await writeTargets(trx, projectId, dto, fromJoint);
     await this.saveJointShares(trx, projectId, dto);
     await this.cells.recompute(projectId, trx);
   }
@@ -199,7 +116,12 @@ export class TargetsService {
   }
 
   /** Reads an uploaded targets file into the shape `save` takes, without saving anything. */
-  parseUpload(file: { buffer: Buffer; originalname?: string } | undefined, interlock = ''): SaveTargetsDto {
+  async parseUpload(projectId: string, file: { buffer: Buffer; originalname?: string } | undefined, interlock = ''): Promise<SaveTargetsDto> {
+    const dto = this.readUpload(file, interlock);
+    return withSavedIds(dto, (await loadActiveTargets(this.db, projectId)).variables);
+  }
+
+  private readUpload(file: { buffer: Buffer; originalname?: string } | undefined, interlock: string): SaveTargetsDto {
     if (!file) throw invalid('attach the targets file as the form field "file"', 'file');
     const text = new TextDecoder('utf-8', { fatal: true });
     let content: string;
@@ -235,6 +157,7 @@ export class TargetsService {
       const dto: SaveTargetsDto = {
         variables: ordered.map((t) => ({
           name: t.variable,
+          columnName: columnNameOf({ name: t.variable }),
           interlocked: chosen.includes(t.variable),
           categories: t.shares.map((s) => ({ label: s.category, share: s.share })),
         })),
@@ -249,4 +172,30 @@ export class TargetsService {
       throw error;
     }
   }
+}
+
+/**
+ * A file's targets matched to the saved ones, so that saving them keeps their identity: a
+ * variable by its column name or display name, a category by its label (any case). A matched
+ * variable takes its saved display name and column name.
+ */
+export function withSavedIds(dto: SaveTargetsDto, saved: ActiveTargets['variables']): SaveTargetsDto {
+  const lower = (s: string) => s.trim().toLowerCase();
+  return {
+    ...dto,
+    variables: dto.variables.map((v) => {
+      const match = saved.find((s) => s.column_name === lower(v.name) || lower(s.name) === lower(v.name) || s.column_name === columnNameOf(v));
+      if (!match) return v;
+      return {
+        ...v,
+        id: match.id,
+        name: match.name,
+        columnName: match.column_name,
+        categories: v.categories.map((c) => {
+          const category = match.categories.find((k) => lower(k.label) === lower(c.label));
+          return category ? { ...c, id: category.id } : c;
+        }),
+      };
+    }),
+  };
 }

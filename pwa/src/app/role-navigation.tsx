@@ -13,6 +13,7 @@ import {
   sunnyOutline,
 } from 'ionicons/icons';
 import type { Role } from '../config/roles';
+import { heading, WORDS } from '../lib/glossary';
 
 // Each role's pages come in their own chunk, loaded when that role signs in, so a phone
 // never downloads another role's code; the heavier office pages (charts, the targets
@@ -55,7 +56,7 @@ export interface NavItem {
 export const roleNavigation: Record<Role, NavItem[]> = {
   interviewer: [
     { path: '/interviewer', label: 'Today', icon: sunnyOutline, element: <TodayPage /> },
-    { path: '/interviewer/outbox', label: 'Outbox', icon: cloudUploadOutline, element: <OutboxPage /> },
+    { path: '/interviewer/outbox', label: heading(WORDS.outbox.one), icon: cloudUploadOutline, element: <OutboxPage /> },
     { path: '/interviewer/cells', label: 'Cells', icon: gridOutline, element: <CellsPage /> },
   ],
   supervisor: [

@@ -273,6 +273,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/balance/retired/{categoryId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["BalanceController_mergeRetired"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{projectId}/cells": {
         parameters: {
             query?: never;
@@ -690,10 +706,14 @@ export interface components {
             maxMarginError: number | null;
             /** @description Completed interviews used (not rejected, with a category on every current variable) */
             n: number;
+            /** @description Completes left out of weighting because they were logged in a retired category not merged into a current one */
+            notWeighted: number;
             /** @description Null before the first counted complete */
             outcome: components["schemas"]["BalanceOutcomeResponse"] | null;
             /** Format: uuid */
             projectId: string;
+            /** @description Retired categories of current variables that hold interviews */
+            retired: components["schemas"]["RetiredCategoryResponse"][];
             /** @description Why no weights could be computed yet, in words for the lead; null when they were */
             weightingProblem: string | null;
             weightMax: number | null;
@@ -783,7 +803,7 @@ export interface components {
          * @description Kept but flagged for the supervisor
          * @enum {string}
          */
-        FlagCode: "project_closed" | "outside_field_dates" | "voided";
+        FlagCode: "project_closed" | "outside_field_dates" | "voided" | "retired_category" | "retired_variable";
         FlagCountResponse: {
             /**
              * @description A flag code (see FlagCode); older rows may carry codes no longer set
@@ -870,6 +890,19 @@ export interface components {
             /** @example plumbline-demo */
             password: string;
         };
+        MergeChoiceResponse: {
+            /** Format: uuid */
+            id: string;
+            /** @example Harbourside */
+            label: string;
+        };
+        MergeRetiredDto: {
+            /**
+             * Format: uuid
+             * @description A current category of the same variable, or null to leave the retired category out of weighting
+             */
+            mergedInto: string | null;
+        };
         MessageResponse: {
             /** @example If that address has an account, a link to choose a new password is on its way */
             message: string;
@@ -917,6 +950,11 @@ export interface components {
             todayContacts: number;
         };
         ParsedCategoryResponse: {
+            /**
+             * Format: uuid
+             * @description The saved category of this label, when there is one
+             */
+            id?: string;
             /** @example 18-24 */
             label: string;
             /**
@@ -932,8 +970,18 @@ export interface components {
         };
         ParsedVariableResponse: {
             categories: components["schemas"]["ParsedCategoryResponse"][];
+            /** @example age_band */
+            columnName: string;
+            /**
+             * Format: uuid
+             * @description The saved quota variable of this name, when there is one
+             */
+            id?: string;
             interlocked: boolean;
-            /** @example age band */
+            /**
+             * @description The saved variable's display name, or the name in the file
+             * @example Age band
+             */
             name: string;
         };
         PasswordSetResponse: {
@@ -1056,11 +1104,19 @@ export interface components {
         };
         QuotaVariableResponse: {
             categories: components["schemas"]["QuotaCategoryResponse"][];
+            /**
+             * @description Column name in targets files, exports and the command line
+             * @example age_band
+             */
+            columnName: string;
             /** Format: uuid */
             id: string;
             /** @description Interlocked variables form crossed cells; the rest are margin quotas */
             interlocked: boolean;
-            /** @example age band */
+            /**
+             * @description Display name: what screens show
+             * @example Age band
+             */
             name: string;
         };
         RefreshDto: {
@@ -1078,6 +1134,28 @@ export interface components {
         RequestResetDto: {
             /** @example lead@vellmoor.example */
             email: string;
+        };
+        RetiredCategoryResponse: {
+            /**
+             * @description The label the interviews were logged with
+             * @example Harbour
+             */
+            category: string;
+            /** @description The current categories of the same variable it may be merged into */
+            choices: components["schemas"]["MergeChoiceResponse"][];
+            /** Format: uuid */
+            id: string;
+            /** @description Counted interviews logged in it */
+            interviews: number;
+            /**
+             * Format: uuid
+             * @description The current category its interviews count as; null when they are not weighted
+             */
+            mergedInto: string | null;
+            /** @example Harbourside */
+            mergedIntoLabel: string | null;
+            /** @example District */
+            variable: string;
         };
         /** @enum {string} */
         Role: "admin" | "lead" | "supervisor" | "interviewer" | "client";
@@ -1149,11 +1227,32 @@ export interface components {
             voided: number;
         };
         TargetCategoryDto: {
+            /**
+             * Format: uuid
+             * @description The saved category this is (a rename keeps it); left out for a new category
+             */
+            id?: string;
             /** @example 18-34 */
             label: string;
             /**
              * @description Population share; any non-negative numbers, normalised per variable
              * @example 0.27
+             */
+            share: number;
+        };
+        TargetCategoryResponse: {
+            /** Format: uuid */
+            id: string;
+            /**
+             * @description Counted interviews logged in this category so far
+             * @example 12
+             */
+            interviews: number;
+            /** @example 18-24 */
+            label: string;
+            /**
+             * @description Population share as saved (normalised per variable)
+             * @example 0.12
              */
             share: number;
         };
@@ -1168,13 +1267,48 @@ export interface components {
             interlockBasis: "joint shares" | "product of margins" | null;
             /** @description Joint shares of the interlocked variables; empty when not given */
             jointShares: components["schemas"]["JointShareResponse"][];
-            variables: components["schemas"]["QuotaVariableResponse"][];
+            variables: components["schemas"]["TargetVariableResponse"][];
         };
         TargetVariableDto: {
             categories: components["schemas"]["TargetCategoryDto"][];
+            /**
+             * @description Column name in targets files, exports and the command line; made from the name when left out
+             * @example age_band
+             */
+            columnName?: string;
+            /**
+             * Format: uuid
+             * @description The saved quota variable this is (a rename keeps it); left out for a new variable
+             */
+            id?: string;
             /** @description Interlocked variables form crossed cells; the rest are margin quotas */
             interlocked?: boolean;
-            /** @example age band */
+            /**
+             * @description Display name: what screens show
+             * @example Age band
+             */
+            name: string;
+        };
+        TargetVariableResponse: {
+            categories: components["schemas"]["TargetCategoryResponse"][];
+            /**
+             * @description Column name in targets files, exports and the command line
+             * @example age_band
+             */
+            columnName: string;
+            /** Format: uuid */
+            id: string;
+            /** @description Interlocked variables form crossed cells; the rest are margin quotas */
+            interlocked: boolean;
+            /**
+             * @description Counted interviews logged with this variable so far
+             * @example 40
+             */
+            interviews: number;
+            /**
+             * @description Display name: what screens show
+             * @example Age band
+             */
             name: string;
         };
         UpdateProjectDto: {
@@ -1314,6 +1448,8 @@ export type JointShareResponse = components['schemas']['JointShareResponse'];
 export type LinkDetailsResponse = components['schemas']['LinkDetailsResponse'];
 export type LinkTokenDto = components['schemas']['LinkTokenDto'];
 export type LoginDto = components['schemas']['LoginDto'];
+export type MergeChoiceResponse = components['schemas']['MergeChoiceResponse'];
+export type MergeRetiredDto = components['schemas']['MergeRetiredDto'];
 export type MessageResponse = components['schemas']['MessageResponse'];
 export type OrganisationRefResponse = components['schemas']['OrganisationRefResponse'];
 export type OtherAnswer = components['schemas']['OtherAnswer'];
@@ -1335,6 +1471,7 @@ export type QuotaVariableResponse = components['schemas']['QuotaVariableResponse
 export type RefreshDto = components['schemas']['RefreshDto'];
 export type RejectedItemResponse = components['schemas']['RejectedItemResponse'];
 export type RequestResetDto = components['schemas']['RequestResetDto'];
+export type RetiredCategoryResponse = components['schemas']['RetiredCategoryResponse'];
 export type Role = components['schemas']['Role'];
 export type SaveTargetsDto = components['schemas']['SaveTargetsDto'];
 export type SessionResponse = components['schemas']['SessionResponse'];
@@ -1347,9 +1484,11 @@ export type SignUpSettingsResponse = components['schemas']['SignUpSettingsRespon
 export type SyncBatchDto = components['schemas']['SyncBatchDto'];
 export type SyncReplyResponse = components['schemas']['SyncReplyResponse'];
 export type TargetCategoryDto = components['schemas']['TargetCategoryDto'];
+export type TargetCategoryResponse = components['schemas']['TargetCategoryResponse'];
 export type TargetsPreviewResponse = components['schemas']['TargetsPreviewResponse'];
 export type TargetsResponse = components['schemas']['TargetsResponse'];
 export type TargetVariableDto = components['schemas']['TargetVariableDto'];
+export type TargetVariableResponse = components['schemas']['TargetVariableResponse'];
 export type UpdateProjectDto = components['schemas']['UpdateProjectDto'];
 export type UserProfileResponse = components['schemas']['UserProfileResponse'];
 export type UserResponse = components['schemas']['UserResponse'];
@@ -1817,6 +1956,32 @@ export interface operations {
             cookie?: never;
         };
         requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BalanceResponse"];
+                };
+            };
+        };
+    };
+    BalanceController_mergeRetired: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                categoryId: string;
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["MergeRetiredDto"];
+            };
+        };
         responses: {
             200: {
                 headers: {

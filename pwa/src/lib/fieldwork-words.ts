@@ -33,12 +33,6 @@ export function dispositionWord(value: unknown): string {
   return typeof value === 'string' && value in dispositionWords ? dispositionWords[value as Disposition] : 'Unknown outcome';
 }
 
-/** "age_band" → "Age band". */
-export function variableWord(name: string): string {
-  const words = name.replace(/[_-]+/g, ' ').trim();
-  return words.charAt(0).toUpperCase() + words.slice(1);
-}
-
 /** The headline question's answers in the order they are offered. */
 export const headlineAnswerOrder: HeadlineAnswer[] = ['yes', 'no', 'dont_know', 'no_answer'];
 

@@ -15,8 +15,8 @@ export const tramProject: FieldProject = {
 };
 
 export const tramVariables: QuotaVariable[] = [
-  { id: 'v-age', name: 'age_band', interlocked: false, categories: [{ id: 'c-young', label: '18-34', share: 0.4 }, { id: 'c-old', label: '35+', share: 0.6 }] },
-  { id: 'v-region', name: 'region', interlocked: false, categories: [{ id: 'c-mardon', label: 'Mardon', share: 0.7 }, { id: 'c-quay', label: 'Old Quay', share: 0.3 }] },
+  { id: 'v-age', name: 'Age band', columnName: 'age_band', interlocked: false, categories: [{ id: 'c-young', label: '18-34', share: 0.4 }, { id: 'c-old', label: '35+', share: 0.6 }] },
+  { id: 'v-region', name: 'Region', columnName: 'region', interlocked: false, categories: [{ id: 'c-mardon', label: 'Mardon', share: 0.7 }, { id: 'c-quay', label: 'Old Quay', share: 0.3 }] },
 ];
 
 export function cell(id: string, label: string, categoryIds: string[], target: number, achieved: number, closedAt: string | null = null): QuotaCell {

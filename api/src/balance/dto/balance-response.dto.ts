@@ -1,7 +1,7 @@
 import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nestjs/swagger';
 import { WITHHELD_FIGURES, type WithheldFigure, type WithheldFigureName } from '../../estimation/withheld.js';
 import type { OtherAnswerShare } from '../../estimation/weighting-summary.js';
-import type { Balance, BalanceMargin } from '../balance.service.js';
+import type { Balance, BalanceMargin, RetiredCategory } from '../balance.service.js';
 
 // Shares are proportions (0–1) everywhere; docs/methods.md defines every figure.
 
@@ -20,6 +20,37 @@ export class BalanceMarginResponse implements BalanceMargin {
 
   @ApiProperty({ type: Number, nullable: true, description: 'Share after raking; null until weights can be computed' })
   weighted: number | null;
+}
+
+export class MergeChoiceResponse {
+  @ApiProperty({ format: 'uuid' })
+  id: string;
+
+  @ApiProperty({ example: 'Harbourside' })
+  label: string;
+}
+
+export class RetiredCategoryResponse implements RetiredCategory {
+  @ApiProperty({ format: 'uuid' })
+  id: string;
+
+  @ApiProperty({ example: 'District' })
+  variable: string;
+
+  @ApiProperty({ example: 'Harbour', description: 'The label the interviews were logged with' })
+  category: string;
+
+  @ApiProperty({ description: 'Counted interviews logged in it' })
+  interviews: number;
+
+  @ApiProperty({ type: String, format: 'uuid', nullable: true, description: 'The current category its interviews count as; null when they are not weighted' })
+  mergedInto: string | null;
+
+  @ApiProperty({ type: String, nullable: true, example: 'Harbourside' })
+  mergedIntoLabel: string | null;
+
+  @ApiProperty({ type: () => [MergeChoiceResponse], description: 'The current categories of the same variable it may be merged into' })
+  choices: MergeChoiceResponse[];
 }
 
 const pair: ApiPropertyOptions = { type: [Number], minItems: 2, maxItems: 2, nullable: true };
@@ -103,6 +134,12 @@ export class BalanceResponse implements Balance {
 
   @ApiProperty({ description: 'Completes left out because they lack a category of a variable added later' })
   excluded: number;
+
+  @ApiProperty({ description: 'Completes left out of weighting because they were logged in a retired category not merged into a current one' })
+  notWeighted: number;
+
+  @ApiProperty({ type: () => [RetiredCategoryResponse], description: 'Retired categories of current variables that hold interviews' })
+  retired: RetiredCategoryResponse[];
 
   @ApiProperty({ type: Boolean, nullable: true })
   converged: boolean | null;

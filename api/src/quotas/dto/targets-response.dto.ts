@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import type { VariableView } from '../cell-allocator.js';
-import type { TargetsView } from '../targets.service.js';
+import type { TargetVariableView, TargetsView } from '../targets.service.js';
 import type { SaveTargetsDto } from './targets.dto.js';
 
 export class QuotaCategoryResponse {
@@ -19,14 +19,43 @@ export class QuotaVariableResponse implements VariableView {
   @ApiProperty({ format: 'uuid' })
   id: string;
 
-  @ApiProperty({ example: 'age band' })
+  @ApiProperty({ example: 'Age band', description: 'Display name: what screens show' })
   name: string;
+
+  @ApiProperty({ example: 'age_band', description: 'Column name in targets files, exports and the command line' })
+  columnName: string;
 
   @ApiProperty({ description: 'Interlocked variables form crossed cells; the rest are margin quotas' })
   interlocked: boolean;
 
   @ApiProperty({ type: () => [QuotaCategoryResponse] })
   categories: QuotaCategoryResponse[];
+}
+
+export class TargetCategoryResponse extends QuotaCategoryResponse {
+  @ApiProperty({ description: 'Counted interviews logged in this category so far', example: 12 })
+  interviews: number;
+}
+
+/** A variable as the set-up screen edits it: with the interviews each category holds. */
+export class TargetVariableResponse implements TargetVariableView {
+  @ApiProperty({ format: 'uuid' })
+  id: string;
+
+  @ApiProperty({ example: 'Age band', description: 'Display name: what screens show' })
+  name: string;
+
+  @ApiProperty({ example: 'age_band', description: 'Column name in targets files, exports and the command line' })
+  columnName: string;
+
+  @ApiProperty({ description: 'Interlocked variables form crossed cells; the rest are margin quotas' })
+  interlocked: boolean;
+
+  @ApiProperty({ description: 'Counted interviews logged with this variable so far', example: 40 })
+  interviews: number;
+
+  @ApiProperty({ type: () => [TargetCategoryResponse] })
+  categories: TargetCategoryResponse[];
 }
 
 export class JointShareResponse {
@@ -40,8 +69,8 @@ export class JointShareResponse {
 export const INTERLOCK_BASES = ['joint shares', 'product of margins'] as const;
 
 export class TargetsResponse implements TargetsView {
-  @ApiProperty({ type: () => [QuotaVariableResponse] })
-  variables: QuotaVariableResponse[];
+  @ApiProperty({ type: () => [TargetVariableResponse] })
+  variables: TargetVariableResponse[];
 
   @ApiProperty({ type: () => [JointShareResponse], description: 'Joint shares of the interlocked variables; empty when not given' })
   jointShares: JointShareResponse[];
@@ -51,6 +80,9 @@ export class TargetsResponse implements TargetsView {
 }
 
 export class ParsedCategoryResponse {
+  @ApiPropertyOptional({ format: 'uuid', description: 'The saved category of this label, when there is one' })
+  id?: string;
+
   @ApiProperty({ example: '18-24' })
   label: string;
 
@@ -59,8 +91,14 @@ export class ParsedCategoryResponse {
 }
 
 export class ParsedVariableResponse {
-  @ApiProperty({ example: 'age band' })
+  @ApiPropertyOptional({ format: 'uuid', description: 'The saved quota variable of this name, when there is one' })
+  id?: string;
+
+  @ApiProperty({ example: 'Age band', description: "The saved variable's display name, or the name in the file" })
   name: string;
+
+  @ApiProperty({ example: 'age_band' })
+  columnName: string;
 
   @ApiProperty()
   interlocked: boolean;

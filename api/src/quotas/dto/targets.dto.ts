@@ -1,11 +1,19 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsBoolean, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { IsBoolean, IsString, IsUUID, Matches, MaxLength, ValidateNested } from 'class-validator';
 import { applyDecorators } from '@nestjs/common';
 import { ListOf, Name, NoNul, NumberFrom, Omittable } from '../../common/validation-rules.js';
 import { MAX_SHARE } from '../../formats/numbers.js';
 
+/** File column names: lower-case letters, digits and underscores, starting with a letter. */
+export const COLUMN_NAME = /^[a-z][a-z0-9_]*$/;
+
 export class TargetCategoryDto {
+  @ApiPropertyOptional({ format: 'uuid', description: 'The saved category this is (a rename keeps it); left out for a new category' })
+  @Omittable()
+  @IsUUID('all', { message: 'id must be the id of a saved category' })
+  id?: string;
+
   @ApiProperty({ example: '18-34' })
   @Name('label', 100)
   label: string;
@@ -16,9 +24,21 @@ export class TargetCategoryDto {
 }
 
 export class TargetVariableDto {
-  @ApiProperty({ example: 'age band' })
+  @ApiPropertyOptional({ format: 'uuid', description: 'The saved quota variable this is (a rename keeps it); left out for a new variable' })
+  @Omittable()
+  @IsUUID('all', { message: 'id must be the id of a saved quota variable' })
+  id?: string;
+
+  @ApiProperty({ example: 'Age band', description: 'Display name: what screens show' })
   @Name('name', 100)
   name: string;
+
+  @ApiPropertyOptional({ example: 'age_band', description: 'Column name in targets files, exports and the command line; made from the name when left out' })
+  @Omittable()
+  @IsString({ message: 'columnName must be text' })
+  @MaxLength(60, { message: 'columnName must be at most 60 characters long' })
+  @Matches(COLUMN_NAME, { message: 'columnName must be lower-case letters, digits and underscores, starting with a letter (such as age_band)' })
+  columnName?: string;
 
   @ApiPropertyOptional({ description: 'Interlocked variables form crossed cells; the rest are margin quotas' })
   @Omittable()

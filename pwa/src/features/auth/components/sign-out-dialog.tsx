@@ -3,6 +3,7 @@ import { FormProblem } from '../../../components/form-problem';
 import { useUnsentCount } from '../../../db/outbox-store';
 import type { SessionUser } from '../../../db/plumbline-db';
 import { useSignOut } from '../api/sign-out';
+import { WORDS } from '../../../lib/glossary';
 
 interface SignOutDialogProps {
   user: SessionUser;
@@ -10,7 +11,7 @@ interface SignOutDialogProps {
 }
 
 function interviews(count: number): string {
-  return count === 1 ? '1 unsent interview' : `${count} unsent interviews`;
+  return count === 1 ? `1 ${WORDS.unsent.one}` : `${count} ${WORDS.unsent.many}`;
 }
 
 export function SignOutDialog({ user, onClose }: SignOutDialogProps) {

@@ -1,6 +1,7 @@
 import './balance.css';
 import { QueryView } from '../../../components/query-view';
 import { EmptyPanel } from '../../../components/state-panels';
+import { useStoredSession } from '../../../db/session-store';
 import { useOnline } from '../../../hooks/use-online';
 import { formatClock, formatCount } from '../../../lib/format';
 import { useBalance, type Balance } from '../api/get-balance';
@@ -8,6 +9,7 @@ import { BalanceCautions } from './balance-cautions';
 import { BalanceFigures } from './balance-figures';
 import { FiguresMethods } from './figures-methods';
 import { HeadlineShare } from './headline-share';
+import { RetiredCategories } from './retired-categories';
 import { SampleMix } from './sample-mix';
 
 interface BalanceViewProps {
@@ -26,15 +28,16 @@ export function BalanceView({ projectId, targetSize }: BalanceViewProps) {
       isEmpty={() => false}
       empty={null}
     >
-      {(data) => <BalanceContent balance={data} targetSize={targetSize} checkedAt={balance.dataUpdatedAt} />}
+      {(data) => <BalanceContent projectId={projectId} balance={data} targetSize={targetSize} checkedAt={balance.dataUpdatedAt} />}
     </QueryView>
   );
 }
 
 // "Updated" is when this screen last heard from the server (a 304 included), not the
 // server's clock in the body: on a 304 the browser hands back the stored body unchanged.
-function BalanceContent({ balance, targetSize, checkedAt }: { balance: Balance; targetSize: number; checkedAt: number }) {
+function BalanceContent({ projectId, balance, targetSize, checkedAt }: { projectId: string; balance: Balance; targetSize: number; checkedAt: number }) {
   const online = useOnline();
+  const role = useStoredSession()?.user.role;
   const checked = formatClock(new Date(checkedAt).toISOString());
   return (
     <>
@@ -62,6 +65,8 @@ function BalanceContent({ balance, targetSize, checkedAt }: { balance: Balance; 
           {formatCount(balance.excluded)} completes lack a category of a quota variable added later and are left out.
         </p>
       ) : null}
+
+      <RetiredCategories projectId={projectId} balance={balance} editable={role === 'lead' || role === 'admin'} />
 
       <section className="pl-section" aria-labelledby="pl-headline-heading">
         <h2 id="pl-headline-heading" className="pl-section-title">Headline share</h2>

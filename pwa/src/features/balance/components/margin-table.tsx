@@ -1,6 +1,7 @@
 import { ScrollBox } from '../../../components/scroll-box';
 import { formatPercent, formatPoints } from '../../../lib/format';
 import type { BalanceMargin } from '../api/get-balance';
+import { heading, WORDS } from '../../../lib/glossary';
 
 /** The same figures as the chart, to read exactly: target, sample and weighted share. */
 export function MarginTable({ variable, margins }: { variable: string; margins: BalanceMargin[] }) {
@@ -9,8 +10,8 @@ export function MarginTable({ variable, margins }: { variable: string; margins: 
       <table className="pl-table pl-margin-table" aria-label={`${variable}: shares`}>
         <thead>
           <tr>
-            <th scope="col">Category</th>
-            <th scope="col" className="is-numeric">Target</th>
+            <th scope="col">{heading(WORDS.category.one)}</th>
+            <th scope="col" className="is-numeric">{heading(WORDS.target.one)}</th>
             <th scope="col" className="is-numeric">Sample</th>
             <th scope="col" className="is-numeric">Gap</th>
             <th scope="col" className="is-numeric">Weighted</th>

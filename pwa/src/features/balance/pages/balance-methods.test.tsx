@@ -11,6 +11,8 @@ const balance = {
   headlineQuestion: 'Do you support extending the tram line to the eastern villages?',
   n: 40,
   excluded: 0,
+  notWeighted: 0,
+  retired: [],
   converged: null,
   iterations: null,
   designEffect: null,

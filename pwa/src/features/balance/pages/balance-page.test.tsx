@@ -15,6 +15,8 @@ const weighted = {
   headlineQuestion: 'Do you support extending the tram line to the eastern villages?',
   n: 495,
   excluded: 0,
+  notWeighted: 0,
+  retired: [],
   converged: true,
   iterations: 5,
   designEffect: 1.205196152351693,

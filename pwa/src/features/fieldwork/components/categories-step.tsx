@@ -1,6 +1,5 @@
 import { RadioGroup } from '../../../components/radio-group';
 import type { QuotaVariable } from '../../../db/plumbline-db';
-import { variableWord } from '../../../lib/fieldwork-words';
 
 interface CategoriesStepProps {
   variables: QuotaVariable[];
@@ -20,7 +19,7 @@ export function CategoriesStep({ variables, chosen, onChange, onNext }: Categori
       {variables.map((variable) => (
         <div key={variable.id} className="pl-variable">
           <h3 id={`pl-var-${variable.id}`} className="pl-variable-name">
-            {variableWord(variable.name)}
+            {variable.name}
           </h3>
           <RadioGroup
             labelledBy={`pl-var-${variable.id}`}

@@ -1,5 +1,4 @@
 import type { QuotaVariable } from '../../../db/plumbline-db';
-import { variableWord } from '../../../lib/fieldwork-words';
 
 interface ObservedCategoriesProps {
   variables: QuotaVariable[];
@@ -18,7 +17,7 @@ export function ObservedCategories({ variables, chosen, onChange }: ObservedCate
       {variables.map((variable) => (
         <div key={variable.id} className="pl-variable">
           <p id={`pl-seen-${variable.id}`} className="pl-small">
-            {variableWord(variable.name)}
+            {variable.name}
           </p>
           <div role="radiogroup" aria-labelledby={`pl-seen-${variable.id}`} className="pl-category-grid">
             {variable.categories.map((category) => {

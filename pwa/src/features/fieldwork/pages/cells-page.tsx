@@ -9,6 +9,7 @@ import { useSyncProgress } from '../../../sync/sync-progress';
 import { useBackgroundSync } from '../../../sync/use-background-sync';
 import { CellTable } from '../components/cell-table';
 import { useFieldStatus } from '../hooks/use-field-status';
+import { heading, WORDS } from '../../../lib/glossary';
 
 export function CellsPage() {
   useBackgroundSync();
@@ -39,10 +40,10 @@ export function CellsPage() {
                 {status ? (
                   <>
                     <p className="pl-muted pl-small">
-                      As of the sync {formatMoment(status.syncedAt)}, with your unsent completes counted.
+                      As of the sync {formatMoment(status.syncedAt)}, with your {WORDS.unsent.many} counted.
                     </p>
-                    <CellTable title="Crossed cells" cells={status.cells.filter((c) => c.kind === 'interlocked')} />
-                    <CellTable title="Single-variable cells" cells={status.cells.filter((c) => c.kind === 'margin')} />
+                    <CellTable title={heading(WORDS.interlocked.many)} cells={status.cells.filter((c) => c.kind === 'interlocked')} />
+                    <CellTable title={heading(WORDS.margin.many)} cells={status.cells.filter((c) => c.kind === 'margin')} />
                   </>
                 ) : (
                   <p className="pl-muted">Not synced on this device yet.</p>

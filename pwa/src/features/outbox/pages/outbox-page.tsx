@@ -13,6 +13,7 @@ import { EntryList } from '../components/entry-list';
 import { RefusedList } from '../components/refused-list';
 import { SendPanel } from '../components/send-panel';
 import { SentList } from '../components/sent-list';
+import { heading, WORDS } from '../../../lib/glossary';
 
 export function OutboxPage() {
   useBackgroundSync();
@@ -31,15 +32,15 @@ export function OutboxPage() {
   const names = new Map((projects ?? []).map((p) => [p.id, p.name]));
 
   return (
-    <PageFrame title="Outbox">
+    <PageFrame title={heading(WORDS.outbox.one)}>
       {!loaded ? (
         <LoadingPanel what="the outbox" />
       ) : (
         <>
-          <section className="pl-outbox" aria-label="Unsent interviews">
+          <section className="pl-outbox" aria-label={heading(WORDS.unsent.many)}>
             <p className="pl-outbox-count">
               <span className="pl-figure pl-outbox-number">{formatCount(waiting.length)}</span>
-              <span>{waiting.length === 1 ? 'unsent interview' : 'unsent interviews'} on this device</span>
+              <span>{waiting.length === 1 ? WORDS.unsent.one : WORDS.unsent.many} on this device</span>
             </p>
             <p>
               Every contact you log is kept on this device until the office has it. Signing out, closing the app or

@@ -3,6 +3,7 @@ import { EmptyPanel } from '../../../components/state-panels';
 import { formatCount } from '../../../lib/format';
 import { useCells } from '../api/get-cells';
 import { ScrollBox } from '../../../components/scroll-box';
+import { heading, WORDS } from '../../../lib/glossary';
 
 /** The cell targets the server allocated (whole numbers that add up to the sample size). */
 export function CellTargets({ projectId }: { projectId: string }) {
@@ -24,17 +25,17 @@ export function CellTargets({ projectId }: { projectId: string }) {
           <table className="pl-table" aria-label="Cell targets">
             <thead>
               <tr>
-                <th scope="col">Cell</th>
+                <th scope="col">{heading(WORDS.cell.one)}</th>
                 <th scope="col">Kind</th>
-                <th scope="col" className="is-numeric">Target</th>
-                <th scope="col" className="is-numeric">Achieved</th>
+                <th scope="col" className="is-numeric">{heading(WORDS.target.one)}</th>
+                <th scope="col" className="is-numeric">{heading(WORDS.achieved.one)}</th>
               </tr>
             </thead>
             <tbody>
               {data.cells.map((cell) => (
                 <tr key={cell.id}>
                   <th scope="row">{cell.label}</th>
-                  <td>{cell.kind === 'interlocked' ? 'Interlocked' : 'Margin'}</td>
+                  <td>{heading(cell.kind === 'interlocked' ? WORDS.interlocked.one : WORDS.margin.one)}</td>
                   <td className="is-numeric pl-figure">{formatCount(cell.target)}</td>
                   <td className="is-numeric pl-figure">{formatCount(cell.achieved)}</td>
                 </tr>

@@ -3,13 +3,21 @@ import type { Targets } from '../api/get-targets';
 
 export interface DraftCategory {
   key: number;
+  /** The saved category this is; absent for a new one. A rename keeps it, so interviews keep counting. */
+  id?: string;
   label: string;
   share: string;
 }
 
 export interface DraftVariable {
   key: number;
+  /** The saved variable this is; absent for a new one. */
+  id?: string;
+  /** Display name: what screens show. */
   name: string;
+  /** Column name in targets files and exports; made from the name until the lead types one. */
+  columnName: string;
+  columnEdited: boolean;
   interlocked: boolean;
   categories: DraftCategory[];
 }
@@ -18,7 +26,7 @@ let nextKey = 1;
 export const newKey = () => nextKey++;
 
 export function blankVariable(): DraftVariable {
-  return { key: newKey(), name: '', interlocked: false, categories: [blankCategory(), blankCategory()] };
+  return { key: newKey(), name: '', columnName: '', columnEdited: false, interlocked: false, categories: [blankCategory(), blankCategory()] };
 }
 
 export function blankCategory(): DraftCategory {
@@ -40,11 +48,26 @@ export function draftFrom(targets: Targets): DraftVariable[] {
     const total = v.categories.reduce((sum, c) => sum + c.share, 0);
     return {
       key: newKey(),
+      ...(v.id ? { id: v.id } : {}),
       name: v.name,
+      columnName: v.columnName ?? toColumnName(v.name),
+      columnEdited: v.id !== undefined,
       interlocked: Boolean(v.interlocked),
-      categories: v.categories.map((c) => ({ key: newKey(), label: c.label, share: asTyped(total > 0 ? c.share / total : 0, 100) })),
+      categories: v.categories.map((c) => ({ key: newKey(), ...(c.id ? { id: c.id } : {}), label: c.label, share: asTyped(total > 0 ? c.share / total : 0, 100) })),
     };
   });
+}
+
+/** The column name the server makes from a display name: "Age band" → age_band (as the API's toColumnName). */
+export function toColumnName(name: string): string {
+  const snake = name.toLowerCase().normalize('NFKD').replace(/[\u0300-\u036f]/g, '').replace(/[^a-z0-9]+/g, '_').replace(/^_+|_+$/g, '');
+  if (snake === '') return '';
+  return (/^[a-z]/.test(snake) ? snake : `v_${snake}`).slice(0, 60);
+}
+
+/** A variable renamed: its column name follows the name until the lead types one or it is saved. */
+export function renamed(variable: DraftVariable, name: string): DraftVariable {
+  return { ...variable, name, columnName: variable.columnEdited ? variable.columnName : toColumnName(name) };
 }
 
 /**
@@ -88,6 +111,10 @@ export function checkDraftTargets(variables: DraftVariable[]): { targets?: Targe
     if (!v.name.trim()) problems.push(`Variable ${i + 1} needs a name.`);
     else if (names.has(name.toLowerCase())) problems.push(`${name} is given twice.`);
     names.add(name.toLowerCase());
+    const column = v.columnName.trim();
+    if (column && !/^[a-z][a-z0-9_]*$/.test(column)) {
+      problems.push(`${name}: the column in files must be lower-case letters, digits and underscores, starting with a letter (such as age_band).`);
+    }
     if (v.categories.length === 0) problems.push(`${name}: add at least one category.`);
     const labels = new Set<string>();
     v.categories.forEach((c, j) => {
@@ -107,9 +134,11 @@ export function checkDraftTargets(variables: DraftVariable[]): { targets?: Targe
     problems,
     targets: {
       variables: variables.map((v) => ({
+        ...(v.id ? { id: v.id } : {}),
         name: v.name.trim(),
+        ...(v.columnName.trim() ? { columnName: v.columnName.trim() } : {}),
         interlocked: v.interlocked,
-        categories: v.categories.map((c) => ({ label: c.label.trim(), share: parseShare(c.share) ?? 0 })),
+        categories: v.categories.map((c) => ({ ...(c.id ? { id: c.id } : {}), label: c.label.trim(), share: parseShare(c.share) ?? 0 })),
       })),
     },
   };

@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { QueryView } from '../../../components/query-view';
+import { heading, WORDS } from '../../../lib/glossary';
 import type { Project } from '../../../lib/projects/get-projects';
-import { useTargets, type Targets } from '../api/get-targets';
+import { useTargets, type SavedTargets, type Targets } from '../api/get-targets';
 import { useSaveTargets } from '../api/save-targets';
 import { usePreviewTargets } from '../api/preview-targets';
 import { useCells } from '../api/get-cells';
@@ -31,7 +32,7 @@ function heldJoint(targets: Targets, source: string): HeldJoint | null {
   return { variables: targets.variables.filter((v) => v.interlocked).map((v) => v.name), shares: targets.jointShares, source };
 }
 
-function TargetsEditor({ project, saved }: { project: Project; saved: Targets }) {
+function TargetsEditor({ project, saved }: { project: Project; saved: SavedTargets }) {
   const save = useSaveTargets(project.id);
   const preview = usePreviewTargets(project.id);
   const current = useCells(project.id);
@@ -44,6 +45,10 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
   const [scaling, setScaling] = useState<{ name: string; total: number }[] | null>(null);
   const [removing, setRemoving] = useState<DraftVariable | null>(null);
   const interlocked = draft.filter((v) => v.interlocked).map((v) => v.name.trim() || 'unnamed');
+  // Interviews each saved variable and category holds, to say so before one is removed.
+  const counts = new Map(saved.variables.flatMap((v) => [[v.id, v.interviews] as const, ...v.categories.map((c) => [c.id, c.interviews] as const)]));
+  const held = (id: string | undefined) => (id ? (counts.get(id) ?? 0) : 0);
+  const inField = project.status !== 'setup';
 
   const change = (next: DraftVariable[]) => {
     setDraft(next);
@@ -106,8 +111,10 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
             variable={variable}
             position={index + 1}
             onChange={(next) => change(draft.map((v) => (v.key === variable.key ? next : v)))}
+            held={held}
+            inField={inField}
             onRemove={() =>
-              project.status === 'setup' ? change(draft.filter((v) => v.key !== variable.key)) : setRemoving(variable)
+              variable.id && (inField || held(variable.id) > 0) ? setRemoving(variable) : change(draft.filter((v) => v.key !== variable.key))
             }
           />
         ))}
@@ -122,8 +129,8 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
       />
       <p className="pl-small">
         {interlocked.length >= 2
-          ? `Interlocked: ${interlocked.join(' × ')}; every other variable is a margin quota.`
-          : 'No variables interlocked: every variable is a margin quota.'}
+          ? `${heading(WORDS.interlockedSet.one)}: ${interlocked.join(' × ')}; every other variable is a ${WORDS.margin.one}.`
+          : `No ${WORDS.interlockedSet.one}: every variable is a ${WORDS.margin.one}.`}
       </p>
       {problems.length > 0 || preview.error ? (
         <div className="pl-form-problem" role="alert">
@@ -146,7 +153,9 @@ function TargetsEditor({ project, saved }: { project: Project; saved: Targets })
       </div>
       {removing ? (
         <RemoveVariableDialog
+          what="variable"
           name={removing.name.trim() || 'this variable'}
+          interviews={held(removing.id)}
           onConfirm={() => {
             change(draft.filter((v) => v.key !== removing.key));
             setRemoving(null);

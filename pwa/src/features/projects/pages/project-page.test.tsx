@@ -102,17 +102,19 @@ describe('quota targets from a CSV file', () => {
 
     await user.click(screen.getByLabelText('Interlock age_band'));
     await user.click(screen.getByLabelText('Interlock sex'));
-    expect(screen.getByText('Interlocked: age_band × sex; every other variable is a margin quota.')).toBeInTheDocument();
+    expect(screen.getByText('Interlocked set: age_band × sex; every other variable is a margin quota.')).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Save targets' }));
     await confirmCells(user);
 
     const cells = await screen.findByRole('table', { name: 'Cell targets' });
     expect(within(cells).getByRole('row', { name: /18-34 × sex: female/ })).toHaveTextContent('61');
+    // The same words as the interviewer's cells page (pwa/src/lib/glossary.ts).
+    expect(within(cells).getByRole('row', { name: /18-34 × sex: female/ })).toHaveTextContent('Interlocked cell');
     const put = api.calls.find((c) => c.method === 'PUT');
     expect(put?.body).toEqual({
       variables: [
-        { name: 'age_band', interlocked: true, categories: [{ label: '18-34', share: 30 }, { label: '35+', share: 70 }] },
-        { name: 'sex', interlocked: true, categories: [{ label: 'female', share: 51 }, { label: 'male', share: 49 }] },
+        { name: 'age_band', columnName: 'age_band', interlocked: true, categories: [{ label: '18-34', share: 30 }, { label: '35+', share: 70 }] },
+        { name: 'sex', columnName: 'sex', interlocked: true, categories: [{ label: 'female', share: 51 }, { label: 'male', share: 49 }] },
       ],
     });
     // Without joint shares the page says the cells are the product of the margins.
@@ -286,29 +288,65 @@ describe('every cell target before saving', () => {
   });
 });
 
-describe('removing a variable mid-field', () => {
-  it('asks first and says the interviews are kept; Keep it changes nothing', async () => {
+describe('editing targets mid-field', () => {
+  const saved = {
+    variables: [
+      { id: 'v-age', name: 'Age band', columnName: 'age_band', interlocked: false, interviews: 10, categories: [
+        { id: 'c-young', label: '18-34', share: 0.3, interviews: 4 }, { id: 'c-old', label: '35+', share: 0.7, interviews: 6 },
+      ] },
+      { id: 'v-region', name: 'District', columnName: 'district', interlocked: false, interviews: 10, categories: [
+        { id: 'c-harbour', label: 'Harbour', share: 0.5, interviews: 7 }, { id: 'c-hill', label: 'Hill', share: 0.3, interviews: 3 }, { id: 'c-new', label: 'Moor', share: 0.2, interviews: 0 },
+      ] },
+    ],
+    jointShares: [],
+    interlockBasis: null,
+  };
+
+  it('asks before removing a variable, naming the interviews it holds; Keep it changes nothing', async () => {
     const api = projectApi('fieldwork');
-    api.on('GET', '/api/projects/p9/targets', () =>
-      json({ variables: [
-        { name: 'age_band', interlocked: false, categories: [{ label: '18-34', share: 0.3 }, { label: '35+', share: 0.7 }] },
-        { name: 'region', interlocked: false, categories: [{ label: 'North', share: 0.5 }, { label: 'South', share: 0.5 }] },
-      ], jointShares: [], interlockBasis: null }),
-    );
+    api.on('GET', '/api/projects/p9/targets', () => json(saved));
     await signedInAs('lead');
     renderApp('/lead/projects/p9');
     const user = userEvent.setup();
 
-    await user.click(await screen.findByRole('button', { name: 'Remove region' }));
-    const dialog = screen.getByRole('dialog', { name: 'Remove region?' });
-    expect(dialog).toHaveTextContent('every interview already logged is kept');
+    await user.click(await screen.findByRole('button', { name: 'Remove District' }));
+    const dialog = screen.getByRole('dialog', { name: 'Remove District?' });
+    expect(dialog).toHaveTextContent('District holds 10 interviews.');
+    expect(dialog).toHaveTextContent('interviews already logged in it are kept, and it is closed for new ones');
     await user.click(within(dialog).getByRole('button', { name: 'Keep it' }));
-    expect(screen.getByLabelText('region: share of North')).toBeInTheDocument();
+    expect(screen.getByLabelText('District: share of Harbour')).toBeInTheDocument();
 
-    await user.click(screen.getByRole('button', { name: 'Remove region' }));
-    await user.click(within(screen.getByRole('dialog', { name: 'Remove region?' })).getByRole('button', { name: 'Remove region' }));
-    expect(screen.queryByLabelText('region: share of North')).not.toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Remove District' }));
+    await user.click(within(screen.getByRole('dialog', { name: 'Remove District?' })).getByRole('button', { name: 'Remove District' }));
+    expect(screen.queryByLabelText('District: share of Harbour')).not.toBeInTheDocument();
     expect(api.calls.some((c) => c.method === 'PUT')).toBe(false);
+  });
+
+  it('renames a category as the same category and retires a removed one after saying what happens to its interviews', async () => {
+    const api = projectApi('fieldwork');
+    api.on('GET', '/api/projects/p9/targets', () => json(saved));
+    api.on('PUT', '/api/projects/p9/targets', ({ body }) => json({ ...(body as object), jointShares: [], interlockBasis: null }));
+    await signedInAs('lead');
+    renderApp('/lead/projects/p9');
+    const user = userEvent.setup();
+
+    const harbour = await screen.findByLabelText('District: category 1');
+    await user.clear(harbour);
+    await user.type(harbour, 'Harbourside');
+    await user.click(screen.getByRole('button', { name: 'Remove Hill from District' }));
+    const dialog = screen.getByRole('dialog', { name: 'Remove Hill?' });
+    expect(dialog).toHaveTextContent('Hill holds 3 interviews.');
+    expect(dialog).toHaveTextContent('left out of weighting unless you merge Hill into another category');
+    await user.click(within(dialog).getByRole('button', { name: 'Remove Hill' }));
+    await user.click(screen.getByRole('button', { name: 'Save targets' }));
+    // Totals are off after the removal: the scaling question comes first.
+    await user.click(await screen.findByRole('button', { name: 'Save scaled to 100%' }));
+
+    await screen.findByText(/Targets saved/);
+    const put = api.calls.find((c) => c.method === 'PUT');
+    const district = (put?.body as { variables: { id?: string; categories: { id?: string; label: string }[] }[] }).variables[1]!;
+    expect(district.id).toBe('v-region');
+    expect(district.categories.map((c) => [c.id, c.label])).toEqual([['c-harbour', 'Harbourside'], ['c-new', 'Moor']]);
   });
 });
 
@@ -319,7 +357,7 @@ describe('quota targets typed in', () => {
     renderApp('/lead/projects/p9');
     const user = userEvent.setup();
 
-    await user.type(await screen.findByPlaceholderText('e.g. age_band'), 'region');
+    await user.type(await screen.findByPlaceholderText('e.g. Age band'), 'region');
     await user.type(screen.getByLabelText('region: category 1'), 'Harrowby');
     await user.type(screen.getByLabelText('region: share of Harrowby'), 'lots');
     await user.type(screen.getByLabelText('region: category 2'), 'Mardon');

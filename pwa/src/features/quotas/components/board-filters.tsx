@@ -1,5 +1,6 @@
 import { useId } from 'react';
 import type { BoardView, StatusFilter } from './board-view';
+import { heading, WORDS } from '../../../lib/glossary';
 
 const statusChoices: { value: StatusFilter; label: string }[] = [
   { value: 'all', label: 'All cells' },
@@ -7,7 +8,7 @@ const statusChoices: { value: StatusFilter; label: string }[] = [
   { value: 'nearly_full', label: 'Nearly full' },
   { value: 'full', label: 'Full' },
   { value: 'closed', label: 'Closed' },
-  { value: 'over_quota', label: 'Over quota' },
+  { value: 'over_quota', label: heading(WORDS.overQuota.one) },
 ];
 
 interface BoardFiltersProps {

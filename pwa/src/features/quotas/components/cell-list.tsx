@@ -3,6 +3,7 @@ import type { Cell } from '../api/get-quota-board';
 import { CellStatusTag } from './cell-status-tag';
 import { CellToggleButton } from './cell-toggle-button';
 import { FillBar } from './fill-bar';
+import { WORDS } from '../../../lib/glossary';
 
 interface CellListProps {
   cells: Cell[];
@@ -29,7 +30,7 @@ export function CellList({ cells, onToggle }: CellListProps) {
           <div className="pl-cell-item-foot">
             <span className="pl-small pl-muted">
               {formatCount(cell.remaining)} to go
-              {cell.overQuota > 0 ? <span className="pl-over"> · {formatCount(cell.overQuota)} over quota</span> : null}
+              {cell.overQuota > 0 ? <span className="pl-over"> · {formatCount(cell.overQuota)} {WORDS.overQuota.one}</span> : null}
             </span>
             {onToggle ? <CellToggleButton cell={cell} onToggle={onToggle} /> : null}
           </div>

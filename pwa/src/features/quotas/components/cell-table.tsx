@@ -5,6 +5,7 @@ import { CellStatusTag } from './cell-status-tag';
 import { CellToggleButton } from './cell-toggle-button';
 import { FillBar } from './fill-bar';
 import { ScrollBox } from '../../../components/scroll-box';
+import { heading, WORDS } from '../../../lib/glossary';
 
 interface CellTableProps {
   cells: Cell[];
@@ -15,9 +16,9 @@ interface CellTableProps {
 }
 
 const columns: { key: SortColumn; label: string; numeric?: boolean }[] = [
-  { key: 'label', label: 'Cell' },
-  { key: 'target', label: 'Target', numeric: true },
-  { key: 'achieved', label: 'Achieved', numeric: true },
+  { key: 'label', label: heading(WORDS.cell.one) },
+  { key: 'target', label: heading(WORDS.target.one), numeric: true },
+  { key: 'achieved', label: heading(WORDS.achieved.one), numeric: true },
   { key: 'remaining', label: 'Remaining', numeric: true },
   { key: 'fillRate', label: 'Fill', numeric: true },
   { key: 'status', label: 'Status' },
@@ -60,7 +61,7 @@ export function CellTable({ cells, view, onSort, onToggle }: CellTableProps) {
             <tr key={cell.id} className={`pl-row-${cell.status}`}>
               <th scope="row" className="pl-cell-label">
                 {cell.label}
-                {cell.overQuota > 0 ? <span className="pl-over"> {formatCount(cell.overQuota)} over quota</span> : null}
+                {cell.overQuota > 0 ? <span className="pl-over"> {formatCount(cell.overQuota)} {WORDS.overQuota.one}</span> : null}
               </th>
               <td className="is-numeric pl-figure">{formatCount(cell.target)}</td>
               <td className="is-numeric pl-figure">{formatCount(cell.achieved)}</td>

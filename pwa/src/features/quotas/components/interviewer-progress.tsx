@@ -1,6 +1,7 @@
 import { formatCount } from '../../../lib/format';
 import type { InterviewerProgress } from '../api/get-quota-board';
 import { ScrollBox } from '../../../components/scroll-box';
+import { heading, WORDS } from '../../../lib/glossary';
 
 /** Completes per interviewer: today and in total (staff data, never shown to clients). */
 export function InterviewerProgressTable({ interviewers }: { interviewers: InterviewerProgress[] }) {
@@ -15,8 +16,8 @@ export function InterviewerProgressTable({ interviewers }: { interviewers: Inter
             <th scope="col">Interviewer</th>
             <th scope="col" className="is-numeric">Today</th>
             <th scope="col" className="is-numeric">In total</th>
-            <th scope="col" className="is-numeric">Contacts</th>
-            <th scope="col" className="is-numeric">Over quota</th>
+            <th scope="col" className="is-numeric">{heading(WORDS.contact.many)}</th>
+            <th scope="col" className="is-numeric">{heading(WORDS.overQuota.one)}</th>
           </tr>
         </thead>
         <tbody>
