@@ -88,15 +88,16 @@ describe('interview sync', () => {
     expect(res.status).toBe(200);
     const byId = res.body.results;
     expect(byId.map((r: { status: string }) => r.status)).toEqual([
-      'accepted', 'rejected', 'rejected', 'rejected', 'rejected', 'rejected', 'rejected', 'accepted', 'rejected',
+      'accepted', 'rejected', 'accepted', 'rejected', 'rejected', 'rejected', 'rejected', 'accepted', 'rejected',
     ]);
     expect(byId[1].reason).toMatch(/^region: unknown category/);
-    expect(byId[2].reason).toBe('region: no category given');
     expect(byId[3].reason).toBe('headlineAnswer is missing');
     expect(byId[4].reason).toBe('id must be a UUID');
     expect(byId[5].reason).toBe('respondentName is not part of an interview');
     expect(byId[6].reason).toBe('endedAt is before startedAt');
-    expect(await rowCount([good.id, refusal.id, unknownCategory.id, extra.id])).toBe(2);
+    expect(await rowCount([good.id, refusal.id, missingVariable.id, unknownCategory.id, extra.id])).toBe(3);
+    // A variable added after the phone last synced: the complete is kept and flagged.
+    expect((await h.db('interviews').where({ id: missingVariable.id }).first('flags')).flags).toEqual(['missing_variable']);
   });
 
   it('accepts an interview for a cell that filled meanwhile, marked over quota', async () => {

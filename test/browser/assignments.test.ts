@@ -28,9 +28,9 @@ describe('per-interviewer assignments', () => {
     await list.getByRole('button', { name: 'Set the assignment of Alys Fenwick' }).click();
     const form = browser.page.getByRole('form', { name: 'Assignment of Alys Fenwick' });
     await form.getByLabel('Completes to reach').fill('150');
-    await form.getByRole('checkbox', { name: /^age.band: 18-24 × sex: female$/ }).check();
+    await form.getByRole('checkbox', { name: /^Age band: 18-24 × Sex: female$/ }).check();
     await form.getByRole('button', { name: 'Save assignment' }).click();
-    await list.getByRole('listitem').filter({ hasText: 'Alys Fenwick' }).getByText(/of 150 completes; cells: age.band: 18-24 × sex: female/).waitFor();
+    await list.getByRole('listitem').filter({ hasText: 'Alys Fenwick' }).getByText(/of 150 completes; cells: Age band: 18-24 × Sex: female/).waitFor();
     await screenshot(browser.page, 'desktop-lead-assignment');
     await browser.close();
 
@@ -41,7 +41,7 @@ describe('per-interviewer assignments', () => {
     const work = page.getByRole('region', { name: 'Your work' });
     await work.getByText(`${mine.completes} of 150 completes`).waitFor();
     const cells = work.getByRole('list', { name: 'Your cells on Vellmoor tram extension' });
-    await cells.getByText('age band: 18-24 × sex: female').waitFor();
+    await cells.getByText('Age band: 18-24 × Sex: female').waitFor();
     expect(await cells.getByRole('listitem').count()).toBe(1);
     expect(await work.getByText(/^Today: \d+ contacts?, \d+ completes?$/).count()).toBe(1);
     await work.scrollIntoViewIfNeeded();

@@ -7,6 +7,7 @@ export const FLAG_REASONS = {
   outside_field_dates: 'Ended more than a day outside the field dates',
   voided: 'Voided after it was sent (no longer counted); the reason is kept with it',
   retired_category: 'Logged in a category the office removed from the targets meanwhile; kept, and weighted only if the lead merges that category into a current one',
+  missing_variable: 'A complete without a category of a quota variable added to the targets meanwhile; kept, left out of that variable\'s cells and of weighting',
   retired_variable: 'Logged with a quota variable the office removed from the targets meanwhile; kept, that answer is not used for quotas or weighting',
 } as const;
 

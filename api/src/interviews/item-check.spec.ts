@@ -151,7 +151,8 @@ describe('categories against the project’s targets', () => {
     expect(checkCategories(item({ categories: { 'v-age': 'C-YOUNG' } }), targets)).toEqual({ ids: ['c-young'], flags: [] });
     expect(checkCategories(item({ categories: { 'v-age': { toString: 1 } } }), targets)).toEqual({ reason: 'age: unknown category' });
     expect(checkCategories(item({ categories: { 'v-region': 'c-north' } }), targets)).toEqual({ reason: 'names a quota variable this project does not have' });
-    expect(checkCategories(item({ categories: {} }), targets)).toEqual({ reason: 'age: no category given' });
+    // A variable the phone did not know yet: kept and flagged, never refused.
+    expect(checkCategories(item({ categories: {} }), targets)).toEqual({ ids: [], flags: ['missing_variable'] });
     expect(checkCategories(item({ headlineAnswer: undefined }), targets)).toEqual({ reason: 'headlineAnswer is missing' });
     expect(checkCategories(item({ disposition: 'refusal', categories: {}, headlineAnswer: undefined }), targets)).toEqual({ ids: [], flags: [] });
   });

@@ -117,7 +117,7 @@ export interface CheckedCategories {
 
 /**
  * The project-dependent check: category ids of the interview, one per variable it names
- * (a complete needs one of every active variable), or the reason it cannot be stored.
+ * (a complete without one of the active variables is kept and flagged), or the reason it cannot be stored.
  * `targets` holds every variable and category the project ever had (loadAllTargets): an id
  * the office retired while the device was out is accepted and flagged, never refused; only an
  * id that was never part of the project is.
@@ -135,7 +135,8 @@ export function checkCategories(item: CheckedItem, targets: ActiveTargets): Chec
   for (const v of targets.variables) {
     const value = Object.hasOwn(item.categories, v.id) ? item.categories[v.id] : undefined;
     if (value === undefined || value === null) {
-      if (complete && !v.retired) return { reason: `${v.name}: no category given` };
+      // A variable added after the phone last synced: kept and flagged, never refused.
+      if (complete && !v.retired) flags.add('missing_variable');
       continue;
     }
     const category = typeof value === 'string' ? v.categories.find((c) => c.id === value.toLowerCase()) : undefined;

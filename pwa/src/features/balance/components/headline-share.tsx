@@ -1,10 +1,10 @@
+import { ScrollBox } from '../../../components/scroll-box';
 import { formatPercent } from '../../../lib/format';
+import { headlineAnswerWords } from '../../../lib/fieldwork-words';
 import type { Balance } from '../api/get-balance';
 import { biasSentence, formatBiasFactor } from './balance-words';
 
 type Outcome = NonNullable<Balance['outcome']>;
-
-const otherWords = { dont_know: 'Don’t know', no_answer: 'No answer' } as const;
 
 /** The share's base, and the answers outside it reported beside it (docs/methods.md, section 2). */
 function OtherAnswers({ outcome }: { outcome: Outcome }) {
@@ -16,26 +16,34 @@ function OtherAnswers({ outcome }: { outcome: Outcome }) {
         every complete is weighted.
       </p>
       {others.length ? (
+        <ScrollBox label="Other answers, scrolls sideways">
         <table className="pl-table pl-small" aria-label="Other answers to the headline question">
           <thead>
             <tr>
               <th scope="col">Answer</th>
-              <th scope="col">Interviews</th>
-              <th scope="col">Unweighted</th>
-              <th scope="col">Weighted</th>
+              <th scope="col" className="is-numeric">
+                Interviews
+              </th>
+              <th scope="col" className="is-numeric">
+                Unweighted
+              </th>
+              <th scope="col" className="is-numeric">
+                Weighted
+              </th>
             </tr>
           </thead>
           <tbody>
             {others.map((o) => (
               <tr key={o.answer}>
-                <th scope="row">{otherWords[o.answer]}</th>
-                <td>{o.count}</td>
-                <td>{formatPercent(o.unweighted)}</td>
-                <td>{formatPercent(o.weighted)}</td>
+                <th scope="row">{headlineAnswerWords[o.answer]}</th>
+                <td className="is-numeric pl-figure">{o.count}</td>
+                <td className="is-numeric pl-figure">{formatPercent(o.unweighted)}</td>
+                <td className="is-numeric pl-figure">{formatPercent(o.weighted)}</td>
               </tr>
             ))}
           </tbody>
         </table>
+        </ScrollBox>
       ) : null}
     </div>
   );

@@ -264,7 +264,7 @@ describe('every cell target before saving', () => {
     renderApp('/lead/projects/p9');
     const user = userEvent.setup();
 
-    await user.type(await screen.findByPlaceholderText('e.g. age_band'), 'district');
+    await user.type(await screen.findByPlaceholderText('e.g. Age band'), 'district');
     await user.type(screen.getByLabelText('district: category 1'), 'Harbour');
     await user.type(screen.getByLabelText('district: category 2'), 'Uplands');
     const cases: [string, string, boolean][] = [
@@ -339,8 +339,9 @@ describe('editing targets mid-field', () => {
     expect(dialog).toHaveTextContent('left out of weighting unless you merge Hill into another category');
     await user.click(within(dialog).getByRole('button', { name: 'Remove Hill' }));
     await user.click(screen.getByRole('button', { name: 'Save targets' }));
-    // Totals are off after the removal: the scaling question comes first.
+    // Totals are off after the removal: the scaling question comes first, then every cell target.
     await user.click(await screen.findByRole('button', { name: 'Save scaled to 100%' }));
+    await confirmCells(user);
 
     await screen.findByText(/Targets saved/);
     const put = api.calls.find((c) => c.method === 'PUT');
