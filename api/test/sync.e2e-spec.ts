@@ -97,7 +97,7 @@ describe('interview sync', () => {
     expect(byId[6].reason).toBe('endedAt is before startedAt');
     expect(await rowCount([good.id, refusal.id, missingVariable.id, unknownCategory.id, extra.id])).toBe(3);
     // A variable added after the phone last synced: the complete is kept and flagged.
-    expect((await h.db('interviews').where({ id: missingVariable.id }).first('flags')).flags).toEqual(['missing_variable']);
+    expect((await h.db('interviews').where({ id: missingVariable.id }).first('flags'))!.flags).toEqual(['missing_variable']);
   });
 
   it('accepts an interview for a cell that filled meanwhile, marked over quota', async () => {

@@ -133,5 +133,7 @@ describe('stage changes', () => {
     await back.getByRole('button', { name: 'Back to set-up' }).click();
     await page.getByText('Being set up', { exact: true }).waitFor();
     expect((await api<{ status: string }>(baseUrl, token, `/projects/${id}`)).status).toBe('setup');
+    // Leave the demo's interviewers with only their own projects, for the tests after this one.
+    await api(baseUrl, token, `/projects/${id}/members`, 'PUT', { userIds: [] });
   });
 });

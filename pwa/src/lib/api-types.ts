@@ -803,7 +803,7 @@ export interface components {
          * @description Kept but flagged for the supervisor
          * @enum {string}
          */
-        FlagCode: "project_closed" | "outside_field_dates" | "voided" | "retired_category" | "retired_variable";
+        FlagCode: "project_closed" | "outside_field_dates" | "voided" | "retired_category" | "missing_variable" | "retired_variable";
         FlagCountResponse: {
             /**
              * @description A flag code (see FlagCode); older rows may carry codes no longer set
