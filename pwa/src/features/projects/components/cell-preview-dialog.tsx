@@ -26,8 +26,8 @@ export function CellPreviewDialog({ cells, current, sampleSize, busy, problem, o
     <ConfirmDialog title="Check the cell targets" confirmLabel={busy ? 'Saving…' : 'Save these targets'} cancelLabel="Go back" onConfirm={onConfirm} onCancel={onCancel} busy={busy} problem={problem}>
       <p>
         {formatCount(cells.length)} cells sharing a sample of {formatCount(sampleSize)}
-        {current.length > 0 ? `; ${formatCount(changed)} ${changed === 1 ? 'target changes' : 'targets change'}` : ''}.
-        {overfull > 0 ? ` ${formatCount(overfull)} ${overfull === 1 ? 'cell already holds' : 'cells already hold'} more interviews than its new target.` : ''}
+        {current.length > 0 ? `; ${changed === 0 ? 'no target changes' : `${formatCount(changed)} ${changed === 1 ? 'target changes' : 'targets change'}`}` : ''}.
+        {overfull > 0 ? ` ${overfull === 1 ? '1 cell already holds more interviews than its new target' : `${formatCount(overfull)} cells already hold more interviews than their new targets`}.` : ''}
       </p>
       <ScrollBox label="New cell targets, scrolls sideways">
         <table className="pl-table" aria-label="New cell targets">
