@@ -25,8 +25,15 @@ const minutes = (ms: number) => ms / 60_000;
 const round1 = (x: number) => Math.round(x * 10) / 10;
 
 /** The local time of day HH:MM of an instant in a time zone. */
+const clocks = new Map<string, Intl.DateTimeFormat>();
 export function localTime(at: Date, timeZone: string): string {
-  const parts = new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).formatToParts(at);
+  // Making a formatter costs far more than using one: one per time zone.
+  let clock = clocks.get(timeZone);
+  if (!clock) {
+    clock = new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+    clocks.set(timeZone, clock);
+  }
+  const parts = clock.formatToParts(at);
   const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '00';
   return `${get('hour')}:${get('minute')}`;
 }
