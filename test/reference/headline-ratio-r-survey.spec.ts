@@ -2,7 +2,7 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { seeded } from '../../api/src/demo/vellmoor.js';
-import { plumbline, runR, tempDir } from './tools.js';
+import { plumbline, rRakedABC, runR, tempDir } from './tools.js';
 
 // The headline share is yes among those who answered yes or no, while every complete is
 // raked (docs/methods.md, section 2). Reference: R survey 4.1 (Debian r-cran-survey, with
@@ -10,26 +10,8 @@ import { plumbline, runR, tempDir } from './tools.js';
 // totals, calfun = "raking")) for the ratio and its standard error, and
 // svyciprop(~yes, subset(calibrated design, answered == 1), method = "beta") for the
 // Korn–Graubard interval (a domain mean is the same ratio, with the same linearised error).
-const R_RATIO = `
-suppressMessages(library(survey))
-d <- read.csv("data.csv", colClasses = c(a = "character", b = "character", c = "character", answer = "character"))
-t <- read.csv("targets.csv", colClasses = c("character", "character", "numeric"))
-d$yes <- as.numeric(d$answer == "yes")
-d$answered <- as.numeric(d$answer %in% c("yes", "no"))
-d$bw <- if ("base" %in% names(d)) d$base else 1
-des <- svydesign(ids = ~1, weights = ~bw, data = d)
-mm <- model.matrix(~a + b + c, d)
-pop <- setNames(numeric(ncol(mm)), colnames(mm))
-pop["(Intercept)"] <- sum(d$bw)
-for (v in unique(t$variable)) {
-  s <- t[t$variable == v, ]
-  for (i in seq_len(nrow(s))) {
-    name <- paste0(v, s$category[i])
-    if (name %in% names(pop)) pop[name] <- s$share[i] / sum(s$share) * sum(d$bw)
-  }
-}
-cal <- calibrate(des, ~a + b + c, population = pop, calfun = "raking", epsilon = 1e-12, maxit = 500)
-r <- svyratio(~yes, ~answered, cal)
+const R_RATIO = `${rRakedABC('a = "character", b = "character", c = "character", answer = "character"', `d$yes <- as.numeric(d$answer == "yes")
+d$answered <- as.numeric(d$answer %in% c("yes", "no"))`)}r <- svyratio(~yes, ~answered, cal)
 ci <- attr(svyciprop(~yes, subset(cal, answered == 1), method = "beta"), "ci")
 cat(format(c(coef(r), SE(r), ci), digits = 17), sep = "\\n")
 `;

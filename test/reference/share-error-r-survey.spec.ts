@@ -3,29 +3,12 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { seeded } from '../../api/src/demo/vellmoor.js';
 import { symmetricHalfWidth } from '../../api/src/estimation/share-interval.js';
-import { plumbline, runR, tempDir } from './tools.js';
+import { plumbline, rRakedABC, runR, tempDir } from './tools.js';
 
 // Reference: R survey 4.1 (Debian r-cran-survey, with r-cran-mass for calibrate):
 // SE(svymean(~y, calibrate(des, ~a+b+c, population = totals, calfun = "raking"))) and
 // svyciprop(~y, same design, method = "beta").
-const R_CALIBRATE = `
-suppressMessages(library(survey))
-d <- read.csv("data.csv", colClasses = c(a = "character", b = "character", c = "character"))
-t <- read.csv("targets.csv", colClasses = c("character", "character", "numeric"))
-d$bw <- if ("base" %in% names(d)) d$base else 1
-des <- svydesign(ids = ~1, weights = ~bw, data = d)
-mm <- model.matrix(~a + b + c, d)
-pop <- setNames(numeric(ncol(mm)), colnames(mm))
-pop["(Intercept)"] <- sum(d$bw)
-for (v in unique(t$variable)) {
-  s <- t[t$variable == v, ]
-  for (i in seq_len(nrow(s))) {
-    name <- paste0(v, s$category[i])
-    if (name %in% names(pop)) pop[name] <- s$share[i] / sum(s$share) * sum(d$bw)
-  }
-}
-cal <- calibrate(des, ~a + b + c, population = pop, calfun = "raking", epsilon = 1e-12, maxit = 500)
-m <- svymean(~y, cal)
+const R_CALIBRATE = `${rRakedABC('a = "character", b = "character", c = "character"')}m <- svymean(~y, cal)
 ci <- attr(svyciprop(~y, cal, method = "beta"), "ci")
 cat(format(c(coef(m), SE(m), ci), digits = 17), sep = "\\n")
 `;

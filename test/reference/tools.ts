@@ -39,6 +39,33 @@ export function runPython(script: string, dir = tempDir()): string {
   }
 }
 
+/**
+ * R lines that read data.csv (quota variables a, b and c, an optional base weight `base`) and
+ * targets.csv from the working folder and rake them with survey::calibrate(calfun = "raking")
+ * into `cal`; `prepare` is R run on `d` just after it is read.
+ */
+export function rRakedABC(dataColumns: string, prepare = ''): string {
+  return `
+suppressMessages(library(survey))
+d <- read.csv("data.csv", colClasses = c(${dataColumns}))
+t <- read.csv("targets.csv", colClasses = c("character", "character", "numeric"))
+${prepare}
+d$bw <- if ("base" %in% names(d)) d$base else 1
+des <- svydesign(ids = ~1, weights = ~bw, data = d)
+mm <- model.matrix(~a + b + c, d)
+pop <- setNames(numeric(ncol(mm)), colnames(mm))
+pop["(Intercept)"] <- sum(d$bw)
+for (v in unique(t$variable)) {
+  s <- t[t$variable == v, ]
+  for (i in seq_len(nrow(s))) {
+    name <- paste0(v, s$category[i])
+    if (name %in% names(pop)) pop[name] <- s$share[i] / sum(s$share) * sum(d$bw)
+  }
+}
+cal <- calibrate(des, ~a + b + c, population = pop, calfun = "raking", epsilon = 1e-12, maxit = 500)
+`;
+}
+
 /** Runs a `plumbline` command in-process. */
 export function plumbline(args: string[]): { code: number; stdout: string; stderr: string; json: Record<string, unknown> } {
   let stdout = '';

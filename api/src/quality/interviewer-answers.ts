@@ -35,7 +35,9 @@ export function interviewerAnswerTests(completes: AnsweredComplete[], settings: 
   // Counts per stratum and interviewer once; each test takes the others as the stratum minus this one.
   const total = new Map<string, { yes: number; no: number }>();
   const own = new Map<string, { yes: number; no: number }>();
+  const countOf = new Map<string, number>();
   for (const c of completes) {
+    countOf.set(c.interviewerId, (countOf.get(c.interviewerId) ?? 0) + 1);
     for (const [map, key] of [[total, c.stratum], [own, `${c.interviewerId}\u0000${c.stratum}`]] as const) {
       const cell = map.get(key) ?? { yes: 0, no: 0 };
       if (c.yes) cell.yes++;
@@ -44,7 +46,7 @@ export function interviewerAnswerTests(completes: AnsweredComplete[], settings: 
     }
   }
   const tested = interviewers.map((id) => {
-    const count = completes.filter((c) => c.interviewerId === id).length;
+    const count = countOf.get(id)!;
     if (count < settings.minimumCompletes) return { id, count, result: null };
     const tables: StratumCounts[] = strata.map((s) => {
       const all = total.get(s)!;

@@ -11,12 +11,14 @@ interface ConfirmDialogProps {
   onCancel: () => void;
   busy?: boolean;
   problem?: string | null;
+  /** Id of the problem line, for a field inside the dialog to point at (aria-describedby). */
+  problemId?: string;
   /** 'confirm' when going ahead is the usual choice; 'cancel' when going ahead is the risky one. */
   main?: 'confirm' | 'cancel';
 }
 
 /** Asks before an action, says what it does, and offers going ahead or backing out. */
-export function ConfirmDialog({ title, children, confirmLabel, cancelLabel = 'Cancel', onConfirm, onCancel, busy = false, problem, main = 'confirm' }: ConfirmDialogProps) {
+export function ConfirmDialog({ title, children, confirmLabel, cancelLabel = 'Cancel', onConfirm, onCancel, busy = false, problem, problemId, main = 'confirm' }: ConfirmDialogProps) {
   const style = (role: 'confirm' | 'cancel') => `pl-button ${main === role ? 'pl-button-main' : 'pl-button-quiet'}`;
   const cancel = (
     <button type="button" className={style('cancel')} onClick={onCancel} autoFocus={main === 'cancel'}>
@@ -31,7 +33,7 @@ export function ConfirmDialog({ title, children, confirmLabel, cancelLabel = 'Ca
   return (
     <Dialog title={title} onClose={onCancel} placement="sheet">
       {children}
-      <FormProblem message={problem} />
+      <FormProblem message={problem} id={problemId} />
       {/* The main choice sits last, nearest the thumb. */}
       <div className="pl-dialog-actions">
         {main === 'confirm' ? (

@@ -1,4 +1,4 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, OmitType } from '@nestjs/swagger';
 import type { VariableView } from '../cell-allocator.js';
 import type { TargetVariableView, TargetsView } from '../targets.service.js';
 import type { SaveTargetsDto } from './targets.dto.js';
@@ -38,19 +38,7 @@ export class TargetCategoryResponse extends QuotaCategoryResponse {
 }
 
 /** A variable as the set-up screen edits it: with the interviews each category holds. */
-export class TargetVariableResponse implements TargetVariableView {
-  @ApiProperty({ format: 'uuid' })
-  id: string;
-
-  @ApiProperty({ example: 'Age band', description: 'Display name: what screens show' })
-  name: string;
-
-  @ApiProperty({ example: 'age_band', description: 'Column name in targets files, exports and the command line' })
-  columnName: string;
-
-  @ApiProperty({ description: 'Interlocked variables form crossed cells; the rest are margin quotas' })
-  interlocked: boolean;
-
+export class TargetVariableResponse extends OmitType(QuotaVariableResponse, ['categories'] as const) implements TargetVariableView {
   @ApiProperty({ description: 'Counted interviews logged with this variable so far', example: 40 })
   interviews: number;
 

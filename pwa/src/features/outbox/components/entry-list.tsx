@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Dialog } from '../../../components/dialog';
+import { ConfirmDialog } from '../../../components/confirm-dialog';
 import { isVoidRecord, type HeadlineAnswer, type InterviewRecord, type OutboxEntry } from '../../../db/plumbline-db';
 import { dispositionWord, headlineAnswerOf, headlineAnswerOrder, headlineAnswerWords } from '../../../lib/fieldwork-words';
 import { formatMoment } from '../../../lib/format';
@@ -58,17 +58,16 @@ export function EntryList({ entries, projectNames, userId }: EntryListProps) {
         })}
       </ul>
       {voiding ? (
-        <Dialog title="Void this contact?" onClose={() => setVoiding(null)}>
+        <ConfirmDialog
+          title="Void this contact?"
+          confirmLabel="Void it"
+          cancelLabel="Keep it"
+          main="cancel"
+          onConfirm={() => void voidUnsentContact(voiding.clientId, userId).then(() => setVoiding(null))}
+          onCancel={() => setVoiding(null)}
+        >
           <p className="pl-dialog-warning">It has not been sent: it is removed from this device and the office never receives it.</p>
-          <div className="pl-dialog-actions">
-            <button type="button" className="pl-button pl-button-main" onClick={() => setVoiding(null)} autoFocus>
-              Keep it
-            </button>
-            <button type="button" className="pl-button pl-button-quiet" onClick={() => void voidUnsentContact(voiding.clientId, userId).then(() => setVoiding(null))}>
-              Void it
-            </button>
-          </div>
-        </Dialog>
+        </ConfirmDialog>
       ) : null}
     </>
   );

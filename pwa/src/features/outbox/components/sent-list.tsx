@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Dialog } from '../../../components/dialog';
+import { ConfirmDialog } from '../../../components/confirm-dialog';
 import type { InterviewRecord, SentEntry } from '../../../db/plumbline-db';
 import { dispositionWord } from '../../../lib/fieldwork-words';
 import { formatMoment } from '../../../lib/format';
@@ -55,26 +55,21 @@ export function SentList({ entries, projectNames, userId }: SentListProps) {
         })}
       </ul>
       {voiding ? (
-        <Dialog title="Void a sent contact?" onClose={close}>
+        <ConfirmDialog
+          title="Void a sent contact?"
+          confirmLabel="Void it"
+          cancelLabel="Keep it"
+          onConfirm={() => void confirm(voiding)}
+          onCancel={close}
+          problem={problem}
+          problemId="pl-void-problem"
+        >
           <p>It stays on record for your supervisor with your reason, but no longer counts in any cell or figure.</p>
           <label className="pl-field">
             <span>Reason</span>
             <textarea value={reason} maxLength={VOID_REASON_MAX} onChange={(event) => setReason(event.target.value)} aria-describedby={problem ? 'pl-void-problem' : undefined} />
           </label>
-          {problem ? (
-            <p id="pl-void-problem" className="pl-form-problem" role="alert">
-              {problem}
-            </p>
-          ) : null}
-          <div className="pl-dialog-actions">
-            <button type="button" className="pl-button pl-button-quiet" onClick={close}>
-              Keep it
-            </button>
-            <button type="button" className="pl-button pl-button-main" onClick={() => void confirm(voiding)}>
-              Void it
-            </button>
-          </div>
-        </Dialog>
+        </ConfirmDialog>
       ) : null}
     </section>
   );
