@@ -18,6 +18,7 @@ import * as m0030 from './20261202003000_quota_identity.js';
 import * as m0400 from './20261202004000_headline_answers.js';
 import * as m0410 from './20261202004100_interview_voids.js';
 import * as m0051 from './20261202005100_assignments_and_archive.js';
+import * as m0060 from './20261202006000_quality_control.js';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000100_organisations_and_users': m0001,
@@ -36,6 +37,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202004000_headline_answers': m0400,
   '20261202004100_interview_voids': m0410,
   '20261202005100_assignments_and_archive': m0051,
+  '20261202006000_quality_control': m0060,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

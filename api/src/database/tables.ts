@@ -67,6 +67,12 @@ export interface ProjectRow {
   targets_updated_at: Date | null;
   /** Set while the project is archived (only a closed project can be); cleared on restore. */
   archived_at: Date | null;
+  /** The lead's changes to the quality defaults (migration 20261202006000), merged over them in code. */
+  quality_settings: Record<string, unknown>;
+  /** Seed of back-check selection: hash(seed, interview id) below the interviewer's share selects. */
+  quality_seed: string;
+  /** When the quality rules last ran over the whole project; null before the first run. */
+  quality_checked_at: Date | null;
   created_at: Date;
 }
 
@@ -218,6 +224,58 @@ export interface InterviewerDayCountRow extends CountMeasures {
   field_day: string;
 }
 
+/** A rule the server found an interview trips (too short, overlapping, out of hours, burst). */
+export interface InterviewFindingRow {
+  interview_id: string;
+  project_id: string;
+  rule: string;
+  reason: string;
+  figures: Record<string, number | string>;
+}
+
+/** One interviewer's headline-answer test (Cochran–Mantel–Haenszel, Benjamini–Hochberg). */
+export interface InterviewerTestRow {
+  project_id: string;
+  interviewer_id: string;
+  completes: number;
+  p_value: number | null;
+  adjusted_p_value: number | null;
+  flagged: boolean;
+  reason: string;
+  figures: Record<string, number | string>;
+}
+
+export type ReviewStatus = InterviewRow['review_status'];
+
+/** The append-only audit trail of review decisions: a trigger refuses UPDATE and DELETE. */
+export interface ReviewDecisionRow {
+  id: string;
+  project_id: string;
+  interview_id: string;
+  action: 'approve' | 'reject' | 'reinstate';
+  previous_status: ReviewStatus;
+  new_status: ReviewStatus;
+  reason: string;
+  decided_by: string;
+  decided_at: Date;
+}
+
+/** An interview selected on arrival for verification by call-back, and its outcome. */
+export interface BackcheckRow {
+  interview_id: string;
+  project_id: string;
+  interviewer_id: string;
+  share_at_selection: number;
+  selected_at: Date;
+  /** A code from the agency's contact sheet, never a direct identifier; deleted N days after the outcome. */
+  respondent_reference: string | null;
+  reference_deleted_at: Date | null;
+  outcome: 'confirmed' | 'not_confirmed' | 'not_reached' | null;
+  outcome_note: string | null;
+  recorded_by: string | null;
+  recorded_at: Date | null;
+}
+
 declare module 'knex/types/tables.js' {
   interface Tables {
     organisations: OrganisationRow;
@@ -239,5 +297,9 @@ declare module 'knex/types/tables.js' {
     interview_day_counts: InterviewDayCountRow;
     interviewer_counts: InterviewerCountRow;
     interviewer_day_counts: InterviewerDayCountRow;
+    interview_findings: InterviewFindingRow;
+    interviewer_tests: InterviewerTestRow;
+    review_decisions: ReviewDecisionRow;
+    backchecks: BackcheckRow;
   }
 }
