@@ -22,6 +22,7 @@ import { InterviewsModule } from './interviews/interviews.module.js';
 import { JobsModule } from './jobs/jobs.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
+import { QualityModule } from './quality/quality.module.js';
 import { QuotasModule } from './quotas/quotas.module.js';
 import { UsersModule } from './users/users.module.js';
 
@@ -54,6 +55,7 @@ export class AppModule {
         AssignmentsModule,
         InterviewsModule,
         BalanceModule,
+        QualityModule,
         JobsModule,
         AccountsModule,
         OrganisationsModule,

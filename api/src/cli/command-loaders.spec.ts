@@ -15,6 +15,7 @@ const BAD_INPUT: Record<string, string[]> = {
   reconcile: ['reconcile', '--input', join(dir, 'missing.json')],
   rates: ['rates', '--input', missing],
   quotas: ['quotas', '--targets', missing, '--total', '0'],
+  'quality-check': ['quality-check', '--project', 'not-an-id'],
   org: ['org', 'create', '--name', 'Harrowby Field', '--admin-email', 'not an address'],
 };
 

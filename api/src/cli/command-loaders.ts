@@ -23,6 +23,10 @@ const LOADERS: Readonly<Record<string, () => Promise<Command>>> = {
     const m = await import('./quotas-command.js');
     return { usage: m.QUOTAS_USAGE, run: m.quotasCommand };
   },
+  'quality-check': async () => {
+    const m = await import('./quality-check-command.js');
+    return { usage: m.QUALITY_CHECK_USAGE, run: m.qualityCheckCommand };
+  },
   org: async () => {
     const m = await import('./org-command.js');
     return { usage: m.ORG_USAGE, run: m.orgCommand };

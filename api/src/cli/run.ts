@@ -3,6 +3,7 @@
 import { dispatch, type Command, type Output } from './dispatch.js';
 import { ORG_USAGE, orgCommand } from './org-command.js';
 import { POSTERIOR_USAGE, posteriorCommand } from './posterior-command.js';
+import { QUALITY_CHECK_USAGE, qualityCheckCommand } from './quality-check-command.js';
 import { QUOTAS_USAGE, quotasCommand } from './quotas-command.js';
 import { RATES_USAGE, ratesCommand } from './rates-command.js';
 import { RECONCILE_USAGE, reconcileCommand } from './reconcile-command.js';
@@ -16,6 +17,7 @@ const COMMANDS: Readonly<Record<string, Command>> = {
   reconcile: { usage: RECONCILE_USAGE, run: reconcileCommand },
   rates: { usage: RATES_USAGE, run: ratesCommand },
   quotas: { usage: QUOTAS_USAGE, run: quotasCommand },
+  'quality-check': { usage: QUALITY_CHECK_USAGE, run: qualityCheckCommand },
   org: { usage: ORG_USAGE, run: orgCommand },
 };
 

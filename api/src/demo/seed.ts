@@ -11,6 +11,8 @@ import type { AuthUser, Role } from '../common/roles.js';
 import { createKnex } from '../database/database.module.js';
 import { SyncService } from '../interviews/sync.service.js';
 import { ProjectAccess } from '../projects/project-access.service.js';
+import { QualityScheduler } from '../quality/quality-jobs.js';
+import { runQualityCheck } from '../quality/quality-check.js';
 import { CellAllocator } from '../quotas/cell-allocator.js';
 import { CellsService } from '../quotas/cells.service.js';
 import { TargetsService } from '../quotas/targets.service.js';
@@ -96,7 +98,7 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
   // Each interviewer works most field days and logs a few contacts; the demo account's
   // own work is part of it, so the interviewer's screens show real history.
   const random = seeded(20261116);
-  const sync = new SyncService(db, new ProjectAccess(db), cells);
+  const sync = new SyncService(db, new ProjectAccess(db), cells, new QualityScheduler());
   for (const user of interviewers) {
     const actor: AuthUser = { id: user.id, organisationId: project.organisation_id, role: 'interviewer', email: user.email, name: user.name };
     const batch: object[] = [];
@@ -120,6 +122,8 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
     }
     await sync.sync(actor, project.id, batch);
   }
+  // The flags exist as soon as the demo starts (a server would queue this after each sync).
+  await runQualityCheck(db, project.id);
   return true;
 }
 

@@ -1,8 +1,12 @@
-// Counts of a project's kept-and-flagged interviews by reason, for the quota board. Reads
-// only flagged rows (partial index interviews_flagged), so unflagged interviews cost nothing.
+// Counts of a project's kept-and-flagged interviews by reason, for the quota board: the
+// arrival flags (read through the partial index interviews_flagged, so unflagged interviews
+// cost nothing) and the quality rules' flags (quality/flagged-rows.ts). An approved interview
+// stops showing its flags.
 import { Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
+import { QUALITY_FLAG_ROWS } from '../quality/flagged-rows.js';
+import { QUALITY_FLAG_CODES, QUALITY_FLAGS, type QualityFlagCode } from '../quality/quality-flags.js';
 import { FLAG_CODES, FLAG_REASONS, type FlagCode } from './flags.js';
 
 /** An interview voided after it was sent: who logged it, who voided it, when and why. */
@@ -27,7 +31,10 @@ export interface FlaggedInterviews {
   voided: VoidedInterview[];
 }
 
-const order = (code: string) => (FLAG_CODES.includes(code as FlagCode) ? FLAG_CODES.indexOf(code as FlagCode) : FLAG_CODES.length);
+const ORDER: string[] = [...FLAG_CODES, ...QUALITY_FLAG_CODES];
+const order = (code: string) => (ORDER.includes(code) ? ORDER.indexOf(code) : ORDER.length);
+const reasonOf = (code: string): string =>
+  FLAG_REASONS[code as FlagCode] ?? QUALITY_FLAGS[code as QualityFlagCode]?.explanation ?? code.replace(/_/g, ' ');
 
 @Injectable()
 export class FlagCountsService {
@@ -35,11 +42,13 @@ export class FlagCountsService {
 
   async counts(projectId: string): Promise<FlaggedInterviews> {
     const { rows } = await this.db.raw<{ rows: { code: string | null; n: number }[] }>(
-      `SELECT f.code, count(DISTINCT i.id)::int AS n
-         FROM interviews i LEFT JOIN LATERAL unnest(i.flags) AS f(code) ON true
-        WHERE i.project_id = ? AND cardinality(i.flags) > 0
-        GROUP BY ROLLUP (f.code)`, // the row with no code is the total of interviews
-      [projectId],
+      `SELECT code, count(DISTINCT id)::int AS n FROM (
+         SELECT i.id, f.code
+           FROM interviews i CROSS JOIN LATERAL unnest(i.flags) AS f(code)
+          WHERE i.project_id = :project AND cardinality(i.flags) > 0 AND i.review_status <> 'approved'
+         UNION ALL ${QUALITY_FLAG_ROWS}) flagged
+        GROUP BY ROLLUP (code)`, // the row with no code is the total of interviews
+      { project: projectId },
     );
     const voided = await this.db('interviews as i')
       .join('users as who', 'who.id', 'i.interviewer_id')
@@ -62,7 +71,7 @@ export class FlagCountsService {
       total: rows.find((r) => r.code === null)?.n ?? 0,
       byReason: rows
         .filter((r) => r.code !== null)
-        .map((r) => ({ code: r.code as string, reason: FLAG_REASONS[r.code as FlagCode] ?? (r.code as string).replace(/_/g, ' '), count: r.n }))
+        .map((r) => ({ code: r.code as string, reason: reasonOf(r.code as string), count: r.n }))
         .sort((a, b) => order(a.code) - order(b.code) || a.code.localeCompare(b.code)),
     };
   }

@@ -13,6 +13,7 @@ import { KNEX } from '../database/database.constants.js';
 import { isDatabaseUnavailable } from '../common/database-unavailable.js';
 import type { ProjectRow } from '../database/tables.js';
 import { ProjectAccess } from '../projects/project-access.service.js';
+import { QualityScheduler } from '../quality/quality-jobs.js';
 import { loadAllTargets, type ActiveTargets } from '../quotas/cell-allocator.js';
 import { CellsService, withCounts, type CellView } from '../quotas/cells.service.js';
 import { flagsOnArrival, type FlagCode } from './flags.js';
@@ -67,6 +68,7 @@ export class SyncService {
     @Inject(KNEX) private readonly db: Knex,
     private readonly access: ProjectAccess,
     private readonly cells: CellsService,
+    private readonly quality: QualityScheduler,
   ) {}
 
   async sync(user: AuthUser, projectId: string, batch: unknown[]): Promise<SyncReply> {
@@ -104,6 +106,8 @@ export class SyncService {
     }
     const { results, cells } = stored;
     const count = (status: SyncResult['status']) => results.filter((r) => r.status === status).length;
+    // New or voided interviews move the median, the overlaps and the answer tests: check again.
+    if (count('accepted') + count('voided') > 0) this.quality.queue(projectId);
     return { results, accepted: count('accepted'), duplicates: count('duplicate'), voided: count('voided'), rejected: count('rejected'), cells };
   }
 

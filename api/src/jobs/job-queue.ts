@@ -9,6 +9,8 @@ export interface QueueDefinition {
   /** Tries after the first (default 5), with delays doubling from retryDelaySeconds. */
   retryLimit?: number;
   retryDelaySeconds?: number;
+  /** pg-boss queue policy; "short" keeps at most one waiting job per singleton key. */
+  policy?: 'standard' | 'short' | 'singleton' | 'stately';
 }
 
 export type JobHandler<T> = (data: T, job: { id: string; name: string }) => Promise<void>;
@@ -45,6 +47,7 @@ export class JobQueue {
           retryLimit: queue.retryLimit ?? 5,
           retryDelay: queue.retryDelaySeconds ?? 30,
           retryBackoff: true,
+          ...(queue.policy ? { policy: queue.policy } : {}),
         }),
       );
       creating.catch(() => this.created.delete(queue.name));
@@ -60,6 +63,16 @@ export class JobQueue {
     const id = await boss.send(queue.name, data, options.startAfterSeconds ? { startAfter: options.startAfterSeconds } : {});
     if (!id) throw new Error(`queue ${queue.name} did not take the job`);
     return id;
+  }
+
+  /**
+   * Queues one job under a singleton key; on a queue whose policy coalesces (such as "short")
+   * it resolves null when a job with that key is already waiting.
+   */
+  async sendOnce<T extends object>(queue: QueueDefinition, data: T, singletonKey: string): Promise<string | null> {
+    await this.define(queue);
+    const boss = await this.start();
+    return boss.send(queue.name, data, { singletonKey });
   }
 
   /** Works on the queue's jobs one at a time; a handler that throws has its job retried. */

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { QualitySchedulerModule } from '../quality/quality-scheduler.module.js';
 import { CellAllocatorModule } from '../quotas/cell-allocator.js';
 import { ProjectAccess } from './project-access.service.js';
 import { ProjectArchive } from './project-archive.service.js';
@@ -7,7 +8,7 @@ import { ProjectsService } from './projects.service.js';
 import { TimeZones } from './time-zones.js';
 
 @Module({
-  imports: [CellAllocatorModule],
+  imports: [CellAllocatorModule, QualitySchedulerModule],
   controllers: [ProjectsController],
   providers: [ProjectsService, ProjectAccess, ProjectArchive, TimeZones],
   exports: [ProjectsService, ProjectAccess],

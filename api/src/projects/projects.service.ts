@@ -10,6 +10,7 @@ import { CellAllocator } from '../quotas/cell-allocator.js';
 import { ProjectAccess } from './project-access.service.js';
 import { TimeZones } from './time-zones.js';
 import { ownProgress, type OwnProgress } from './own-progress.js';
+import { QualityScheduler } from '../quality/quality-jobs.js';
 
 export interface ProjectSummary {
   id: string;
@@ -68,6 +69,7 @@ export class ProjectsService {
     private readonly access: ProjectAccess,
     private readonly cells: CellAllocator,
     private readonly zones: TimeZones,
+    private readonly quality: QualityScheduler,
   ) {}
 
   /** Archived projects are left out unless asked for, then they are all that is listed. */
@@ -133,6 +135,8 @@ export class ProjectsService {
       }
       return updated as ProjectRow;
     });
+    // Out-of-hours starts are read in the project's time zone: the flags are computed again.
+    if (changes.time_zone !== undefined || changes.field_start !== undefined || changes.field_end !== undefined) this.quality.queue(id);
     return projectSummary(row);
   }
 
