@@ -209,6 +209,38 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{id}/quality-settings": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QualityController_getSettings"];
+        put: operations["QualityController_putSettings"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{id}/quality/findings-summary": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["QualityController_summary"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{id}/restore": {
         parameters: {
             query?: never;
@@ -648,6 +680,18 @@ export interface components {
              */
             userId: string;
         };
+        BackChecksDto: {
+            enabled: boolean;
+            /** @example 30 */
+            keepReferenceDays: number;
+            /**
+             * @description Added to an interviewer’s share after a back-check does not confirm
+             * @example 0.1
+             */
+            raiseAfterNotConfirmed: number;
+            /** @example 0.1 */
+            share: number;
+        };
         BalanceMarginResponse: {
             /** @example 18-24 */
             category: string;
@@ -720,6 +764,14 @@ export interface components {
             weightMin: number | null;
             /** @description Figures not given because they cannot be trusted, each with its reason */
             withheld: components["schemas"]["WithheldFigureResponse"][];
+        };
+        BurstsDto: {
+            enabled: boolean;
+            /**
+             * @description More completes than this by one interviewer within an hour are flagged
+             * @example 4
+             */
+            perHour: number;
         };
         CellResponse: {
             /** @description Counted interviews in the cell */
@@ -799,6 +851,15 @@ export interface components {
              */
             status: "duplicate";
         };
+        FindingsSummaryResponse: {
+            /**
+             * Format: date-time
+             * @description When the flags were last computed
+             */
+            checkedAt: string | null;
+            interviewers: components["schemas"]["InterviewerTestResponse"][];
+            rules: components["schemas"]["RuleCountResponse"][];
+        };
         /**
          * @description Kept but flagged for the supervisor
          * @enum {string}
@@ -827,6 +888,16 @@ export interface components {
             /** @enum {string} */
             status: "ok";
         };
+        InterviewerAnswersDto: {
+            enabled: boolean;
+            /**
+             * @description False discovery rate (Benjamini–Hochberg)
+             * @example 0.1
+             */
+            falseDiscoveryRate: number;
+            /** @example 20 */
+            minimumCompletes: number;
+        };
         InterviewerProgressResponse: {
             /** @description Counted completes on the project's field day today */
             completesToday: number;
@@ -836,6 +907,20 @@ export interface components {
             id: string;
             name: string;
             overQuota: number;
+        };
+        InterviewerTestResponse: {
+            /** @description Benjamini–Hochberg adjusted p-value; null when not tested */
+            adjustedPValue: number | null;
+            /** @description Counted completes that answered the headline question yes or no */
+            completes: number;
+            flagged: boolean;
+            /** Format: uuid */
+            interviewerId: string;
+            name: string;
+            /** @description Cochran–Mantel–Haenszel p-value; null when not tested */
+            pValue: number | null;
+            /** @description The result in words, with the figures behind it */
+            reason: string;
         };
         InvitePersonDto: {
             /** @example new.interviewer@vellmoor.example */
@@ -923,6 +1008,13 @@ export interface components {
             unweighted: number;
             /** @description The same share after raking */
             weighted: number;
+        };
+        OutOfHoursDto: {
+            enabled: boolean;
+            /** @example 08:00 */
+            from: string;
+            /** @example 21:00 */
+            to: string;
         };
         OwnAssignmentResponse: {
             /** @description Quota cells to work; empty: any cell */
@@ -1082,6 +1174,25 @@ export interface components {
         };
         /** @enum {string} */
         ProjectStatus: "setup" | "fieldwork" | "closed";
+        QualitySettingsDto: {
+            backChecks: components["schemas"]["BackChecksDto"];
+            bursts: components["schemas"]["BurstsDto"];
+            interviewerAnswers: components["schemas"]["InterviewerAnswersDto"];
+            outOfHours: components["schemas"]["OutOfHoursDto"];
+            overlapping: components["schemas"]["SwitchOnlyDto"];
+            tooShort: components["schemas"]["TooShortDto"];
+        };
+        QualitySettingsResponse: {
+            /**
+             * Format: date-time
+             * @description When the flags were last computed; null before the first run
+             */
+            checkedAt: string | null;
+            /** @description What a rule is when the lead has not changed it */
+            defaults: components["schemas"]["QualitySettingsDto"];
+            /** @description The project’s rules: its changes over the defaults */
+            settings: components["schemas"]["QualitySettingsDto"];
+        };
         QuotaBoardResponse: {
             cells: components["schemas"]["CellResponse"][];
             interviewers: components["schemas"]["InterviewerProgressResponse"][];
@@ -1159,6 +1270,19 @@ export interface components {
         };
         /** @enum {string} */
         Role: "admin" | "lead" | "supervisor" | "interviewer" | "client";
+        RuleCountResponse: {
+            /**
+             * @example too_short
+             * @enum {string}
+             */
+            code: "too_short" | "overlapping" | "out_of_hours" | "burst" | "interviewer_answers" | "backcheck_not_confirmed";
+            /** @description One sentence saying what trips the flag */
+            explanation: string;
+            /** @description Interviews carrying the flag, approved ones left out */
+            interviews: number;
+            /** @example Too short */
+            label: string;
+        };
         SaveTargetsDto: {
             /** @description Joint shares of the interlocked variables (every combination); without them cell targets are the product of the margins */
             jointShares?: components["schemas"]["JointShareDto"][];
@@ -1209,6 +1333,9 @@ export interface components {
         };
         SignUpSettingsResponse: {
             /** @description Whether new organisations may sign up here (SIGNUP_ENABLED) */
+            enabled: boolean;
+        };
+        SwitchOnlyDto: {
             enabled: boolean;
         };
         SyncBatchDto: {
@@ -1310,6 +1437,19 @@ export interface components {
              * @example Age band
              */
             name: string;
+        };
+        TooShortDto: {
+            enabled: boolean;
+            /**
+             * @description A complete shorter than this share of the median complete is flagged
+             * @example 0.333
+             */
+            fractionOfMedian: number;
+            /**
+             * @description Or shorter than this many minutes; null for no minimum
+             * @example null
+             */
+            minimumMinutes: number | null;
         };
         UpdateProjectDto: {
             /**
@@ -1427,9 +1567,11 @@ export interface components {
 }
 export type AcceptedItemResponse = components['schemas']['AcceptedItemResponse'];
 export type AssignmentResponse = components['schemas']['AssignmentResponse'];
+export type BackChecksDto = components['schemas']['BackChecksDto'];
 export type BalanceMarginResponse = components['schemas']['BalanceMarginResponse'];
 export type BalanceOutcomeResponse = components['schemas']['BalanceOutcomeResponse'];
 export type BalanceResponse = components['schemas']['BalanceResponse'];
+export type BurstsDto = components['schemas']['BurstsDto'];
 export type CellResponse = components['schemas']['CellResponse'];
 export type CellsResponse = components['schemas']['CellsResponse'];
 export type CellStatus = components['schemas']['CellStatus'];
@@ -1437,11 +1579,14 @@ export type ChangeRoleDto = components['schemas']['ChangeRoleDto'];
 export type CreateProjectDto = components['schemas']['CreateProjectDto'];
 export type CreateUserDto = components['schemas']['CreateUserDto'];
 export type DuplicateItemResponse = components['schemas']['DuplicateItemResponse'];
+export type FindingsSummaryResponse = components['schemas']['FindingsSummaryResponse'];
 export type FlagCode = components['schemas']['FlagCode'];
 export type FlagCountResponse = components['schemas']['FlagCountResponse'];
 export type FlaggedInterviewsResponse = components['schemas']['FlaggedInterviewsResponse'];
 export type HealthResponse = components['schemas']['HealthResponse'];
+export type InterviewerAnswersDto = components['schemas']['InterviewerAnswersDto'];
 export type InterviewerProgressResponse = components['schemas']['InterviewerProgressResponse'];
+export type InterviewerTestResponse = components['schemas']['InterviewerTestResponse'];
 export type InvitePersonDto = components['schemas']['InvitePersonDto'];
 export type JointShareDto = components['schemas']['JointShareDto'];
 export type JointShareResponse = components['schemas']['JointShareResponse'];
@@ -1454,6 +1599,7 @@ export type MessageResponse = components['schemas']['MessageResponse'];
 export type OrganisationRefResponse = components['schemas']['OrganisationRefResponse'];
 export type OtherAnswer = components['schemas']['OtherAnswer'];
 export type OtherAnswerResponse = components['schemas']['OtherAnswerResponse'];
+export type OutOfHoursDto = components['schemas']['OutOfHoursDto'];
 export type OwnAssignmentResponse = components['schemas']['OwnAssignmentResponse'];
 export type OwnProgressResponse = components['schemas']['OwnProgressResponse'];
 export type ParsedCategoryResponse = components['schemas']['ParsedCategoryResponse'];
@@ -1465,6 +1611,8 @@ export type ProjectListItemResponse = components['schemas']['ProjectListItemResp
 export type ProjectMemberResponse = components['schemas']['ProjectMemberResponse'];
 export type ProjectResponse = components['schemas']['ProjectResponse'];
 export type ProjectStatus = components['schemas']['ProjectStatus'];
+export type QualitySettingsDto = components['schemas']['QualitySettingsDto'];
+export type QualitySettingsResponse = components['schemas']['QualitySettingsResponse'];
 export type QuotaBoardResponse = components['schemas']['QuotaBoardResponse'];
 export type QuotaCategoryResponse = components['schemas']['QuotaCategoryResponse'];
 export type QuotaVariableResponse = components['schemas']['QuotaVariableResponse'];
@@ -1473,6 +1621,7 @@ export type RejectedItemResponse = components['schemas']['RejectedItemResponse']
 export type RequestResetDto = components['schemas']['RequestResetDto'];
 export type RetiredCategoryResponse = components['schemas']['RetiredCategoryResponse'];
 export type Role = components['schemas']['Role'];
+export type RuleCountResponse = components['schemas']['RuleCountResponse'];
 export type SaveTargetsDto = components['schemas']['SaveTargetsDto'];
 export type SessionResponse = components['schemas']['SessionResponse'];
 export type SetAssignmentDto = components['schemas']['SetAssignmentDto'];
@@ -1481,6 +1630,7 @@ export type SetPasswordDto = components['schemas']['SetPasswordDto'];
 export type SignUpDto = components['schemas']['SignUpDto'];
 export type SignUpResponse = components['schemas']['SignUpResponse'];
 export type SignUpSettingsResponse = components['schemas']['SignUpSettingsResponse'];
+export type SwitchOnlyDto = components['schemas']['SwitchOnlyDto'];
 export type SyncBatchDto = components['schemas']['SyncBatchDto'];
 export type SyncReplyResponse = components['schemas']['SyncReplyResponse'];
 export type TargetCategoryDto = components['schemas']['TargetCategoryDto'];
@@ -1489,6 +1639,7 @@ export type TargetsPreviewResponse = components['schemas']['TargetsPreviewRespon
 export type TargetsResponse = components['schemas']['TargetsResponse'];
 export type TargetVariableDto = components['schemas']['TargetVariableDto'];
 export type TargetVariableResponse = components['schemas']['TargetVariableResponse'];
+export type TooShortDto = components['schemas']['TooShortDto'];
 export type UpdateProjectDto = components['schemas']['UpdateProjectDto'];
 export type UserProfileResponse = components['schemas']['UserProfileResponse'];
 export type UserResponse = components['schemas']['UserResponse'];
@@ -1853,6 +2004,73 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ProjectMemberResponse"][];
+                };
+            };
+        };
+    };
+    QualityController_getSettings: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QualitySettingsResponse"];
+                };
+            };
+        };
+    };
+    QualityController_putSettings: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["QualitySettingsDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["QualitySettingsResponse"];
+                };
+            };
+        };
+    };
+    QualityController_summary: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FindingsSummaryResponse"];
                 };
             };
         };

@@ -21,6 +21,15 @@ const people = [
   { id: 'u3', name: 'Vellmoor Transit Board', email: 'c@x', role: 'client', createdAt: '2026-01-01' },
 ];
 
+const qualityDefaults = {
+  tooShort: { enabled: true, fractionOfMedian: 1 / 3, minimumMinutes: null },
+  overlapping: { enabled: true },
+  outOfHours: { enabled: true, from: '08:00', to: '21:00' },
+  bursts: { enabled: true, perHour: 4 },
+  interviewerAnswers: { enabled: true, minimumCompletes: 20, falseDiscoveryRate: 0.1 },
+  backChecks: { enabled: true, share: 0.1, raiseAfterNotConfirmed: 0.1, keepReferenceDays: 30 },
+};
+
 function projectApi(status = 'setup'): FakeApi {
   const api = installFakeApi();
   api.on('GET', '/api/projects/p9', () => json({ ...project, status }));
@@ -28,6 +37,7 @@ function projectApi(status = 'setup'): FakeApi {
   api.on('GET', '/api/projects/p9/cells', () => json({ variables: [], cells: [], refreshedAt: '2026-12-02T10:00:00Z' }));
   api.on('GET', '/api/projects/p9/members', () => json([]));
   api.on('GET', '/api/users', () => json(people));
+  api.on('GET', '/api/projects/p9/quality-settings', () => json({ settings: qualityDefaults, defaults: qualityDefaults, checkedAt: null }));
   api.on('POST', '/api/projects/p9/targets/preview', () => json({ cells: previewCells }));
   return api;
 }

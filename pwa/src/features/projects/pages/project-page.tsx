@@ -5,6 +5,7 @@ import { QueryView } from '../../../components/query-view';
 import { rememberProject } from '../../../lib/projects/chosen-project';
 import { useProject } from '../api/get-project';
 import { ProjectDetails } from '../components/project-details';
+import { QualitySection } from '../components/quality-section';
 import { StatusControl } from '../components/status-control';
 import { TargetsSection } from '../components/targets-section';
 import { TeamSection } from '../components/team-section';
@@ -52,6 +53,10 @@ export function ProjectPage() {
             <section className="pl-section" aria-labelledby="pl-team-heading">
               <h2 id="pl-team-heading" className="pl-section-title">Team</h2>
               <TeamSection projectId={p.id} readOnly={p.archivedAt !== null} />
+            </section>
+            <section className="pl-section" aria-labelledby="pl-quality-heading">
+              <h2 id="pl-quality-heading" className="pl-section-title">Quality rules</h2>
+              <QualitySection projectId={p.id} readOnly={p.archivedAt !== null} />
             </section>
           </>
         )}
