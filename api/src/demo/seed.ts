@@ -16,6 +16,7 @@ import { runQualityCheck } from '../quality/quality-check.js';
 import { CellAllocator } from '../quotas/cell-allocator.js';
 import { CellsService } from '../quotas/cells.service.js';
 import { TargetsService } from '../quotas/targets.service.js';
+import { habitsOf } from './habits.js';
 import { drawRespondent, seeded, VELLMOOR_AGE_SEX, VELLMOOR_TARGETS } from './vellmoor.js';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
@@ -50,7 +51,8 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
   const existing = await db('organisations').where({ name: DEMO_ORGANISATION }).first();
   if (existing) return false;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  const fieldStart = today - 16 * DAY;
+  // Field days start at midnight (UTC), so the hours worked are the same whenever the demo is seeded.
+  const fieldStart = Math.floor(today / DAY) * DAY - 16 * DAY;
 
   const { project, interviewers } = await db.transaction(async (trx) => {
     const [org] = await trx('organisations').insert({ name: DEMO_ORGANISATION }).returning('*');
@@ -97,27 +99,30 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
 
   // Each interviewer works most field days and logs a few contacts; the demo account's
   // own work is part of it, so the interviewer's screens show real history.
+  // A few of them have habits the quality rules flag (habits.ts).
   const random = seeded(20261116);
+  const leaning = seeded(7);
   const sync = new SyncService(db, new ProjectAccess(db), cells, new QualityScheduler());
   for (const user of interviewers) {
     const actor: AuthUser = { id: user.id, organisationId: project.organisation_id, role: 'interviewer', email: user.email, name: user.name };
+    const habits = habitsOf(user.email);
     const batch: object[] = [];
     for (let day = 0; day < 16; day++) {
       if (random() < 0.2) continue;
       const completes = 5 + Math.floor(random() * 7);
-      let clock = fieldStart + day * DAY + (9.5 + random() * 2) * 3_600_000;
+      let clock = fieldStart + day * DAY + habits.firstHour(random(), day) * 3_600_000;
       const contact = (disposition: string, extra: object = {}) => {
-        const minutes = disposition === 'complete' ? 12 + random() * 14 : 1 + random() * 3;
+        const minutes = disposition === 'complete' ? habits.completeMinutes(random()) : 1 + random() * 3;
         const startedAt = new Date(clock).toISOString();
         clock += minutes * 60_000;
         batch.push({ id: randomUUID(), disposition, startedAt, endedAt: new Date(clock).toISOString(), ...extra });
-        clock += (5 + random() * 30) * 60_000;
+        clock += habits.gapMinutes(random(), minutes) * 60_000;
       };
       for (let i = 0; i < completes; i++) {
         for (const [disposition, rate] of OTHER_OUTCOMES) if (random() < rate) contact(disposition);
         const r = drawRespondent(random);
         const categories = Object.fromEntries(Object.entries(r.categories).map(([v, c]) => idOf(v, c)));
-        contact('complete', { categories, headlineAnswer: r.supports });
+        contact('complete', { categories, headlineAnswer: r.supports || (habits.lean > 0 && leaning() < habits.lean) });
       }
     }
     await sync.sync(actor, project.id, batch);
