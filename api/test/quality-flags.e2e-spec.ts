@@ -8,6 +8,7 @@ import { DEFAULT_QUALITY_SETTINGS } from '../src/quality/quality-settings.js';
 import { PASSWORD, signIn, startApp, type Harness, type TestOrg } from './harness.js';
 import { client, pick, syncProject, type Targets } from './fieldwork-helpers.js';
 import { hashPassword } from '../src/auth/password.js';
+import { runAsync } from '../src/cli/run.js';
 
 let h: Harness;
 let org: TestOrg;
@@ -72,13 +73,14 @@ afterAll(() => h.close());
 
 describe('quality flags computed by the server', () => {
   it('computes the flags by itself after a sync (the queued job)', async () => {
-    for (let tries = 0; tries < 100; tries++) {
+    for (let tries = 0; tries < 300; tries++) {
       const row = await h.db('projects').where({ id: org.projectId }).first('quality_checked_at');
       if (row!.quality_checked_at) break;
       await new Promise((r) => setTimeout(r, 200));
     }
-    expect((await summary()).checkedAt).not.toBeNull();
-  });
+    const jobs = await h.db.raw(`SELECT state, count(*) FROM pgboss.job WHERE name = 'quality-check' GROUP BY state`);
+    expect((await summary()).checkedAt, JSON.stringify(jobs.rows)).not.toBeNull();
+  }, 70_000);
 
   it('flags each rule with its reason and the figures behind it', async () => {
     const result = await recompute();
@@ -165,6 +167,17 @@ describe('the lead\'s quality rules', () => {
     expect(await h.db('projects').where({ id: org.projectId }).first('quality_settings')).toEqual(before);
   });
 
+  it('refuses changes while the project is archived, as every other edit', async () => {
+    await h.db('projects').where({ id: org.projectId }).update({ status: 'closed', archived_at: new Date() });
+    try {
+      const res = await lead.put(settingsPath(), DEFAULT_QUALITY_SETTINGS);
+      expect(res.status).toBe(409);
+      expect(res.body.message).toMatch(/archived and read-only/);
+    } finally {
+      await h.db('projects').where({ id: org.projectId }).update({ status: 'fieldwork', archived_at: null });
+    }
+  });
+
   it('lets the supervisor read but not change them; interviewers and clients get neither', async () => {
     const supervisor = await client(h, org, 'supervisor');
     expect((await supervisor.get(settingsPath())).status).toBe(200);
@@ -176,5 +189,21 @@ describe('the lead\'s quality rules', () => {
       expect((await someone.put(settingsPath(), DEFAULT_QUALITY_SETTINGS)).status).toBe(403);
       expect((await someone.get(`${base}/quality/findings-summary`)).status).toBe(403);
     }
+  });
+});
+
+describe('plumbline quality-check', () => {
+  it('computes the flags at once and says what it found', async () => {
+    let out = '';
+    const code = await runAsync(['quality-check', '--project', org.projectId], { out: (t) => (out += t), err: (t) => (out += t) });
+    expect(code).toBe(0);
+    expect(JSON.parse(out)).toMatchObject({ projectId: org.projectId, interviews: 4 * 30 + 30 + 9, findings: 6 + 2, interviewersFlagged: 1 });
+  });
+
+  it('names an unknown project and changes nothing', async () => {
+    let err = '';
+    const missing = randomUUID();
+    expect(await runAsync(['quality-check', '--project', missing], { out: () => undefined, err: (t) => (err += t) })).toBe(2);
+    expect(err).toBe(`plumbline quality-check: no project ${missing}; nothing was changed\n`);
   });
 });

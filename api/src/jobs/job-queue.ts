@@ -41,15 +41,26 @@ export class JobQueue {
   define(queue: QueueDefinition): Promise<void> {
     let creating = this.created.get(queue.name);
     if (!creating) {
-      creating = this.start().then((boss) =>
+      const create = (boss: PgBoss) =>
         boss.createQueue(queue.name, {
           name: queue.name,
           retryLimit: queue.retryLimit ?? 5,
           retryDelay: queue.retryDelaySeconds ?? 30,
           retryBackoff: true,
           ...(queue.policy ? { policy: queue.policy } : {}),
-        }),
-      );
+        });
+      // Two queues created at once on a new database can deadlock in PostgreSQL (one of them
+      // is refused): the refused one is tried again.
+      creating = this.start().then(async (boss) => {
+        for (let attempt = 0; ; attempt++) {
+          try {
+            return await create(boss);
+          } catch (error) {
+            if (attempt >= 4 || (error as { code?: string }).code !== '40P01') throw error;
+            await sleep(100 * 2 ** attempt);
+          }
+        }
+      });
       creating.catch(() => this.created.delete(queue.name));
       this.created.set(queue.name, creating);
     }
