@@ -148,6 +148,18 @@ describe('the lead\'s quality rules', () => {
     expect((await lead.get(settingsPath())).body.settings.bursts).toEqual({ enabled: false, perHour: 4 });
   });
 
+  it('computes the flags again by itself when the lead moves the project to another time zone', async () => {
+    // 22:30 in London is inside the lead's new hours (07:00–23:00); 23:30 in Berlin is not.
+    expect((await lead.patch(base, { timeZone: 'Europe/Berlin' })).status).toBe(200);
+    let found: Awaited<ReturnType<typeof findings>> = [];
+    for (let tries = 0; tries < 300 && found.length === 0; tries++) {
+      found = await findings('out_of_hours');
+      if (found.length === 0) await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(found.map((f) => [f.interview_id, f.reason])).toEqual([[lateStart, 'Started at 23:30, outside the hours 07:00–23:00 (Europe/Berlin)']]);
+    expect((await lead.patch(base, { timeZone: 'Europe/London' })).status).toBe(200);
+  }, 70_000);
+
   it.each([
     ['a fraction of 0', { tooShort: { enabled: true, fractionOfMedian: 0, minimumMinutes: null } }, 'fractionOfMedian must be more than 0 and at most 1'],
     ['a time that is not HH:MM', { outOfHours: { enabled: true, from: '8am', to: '21:00' } }, 'from must be a time of day written HH:MM, such as 08:00'],
