@@ -9,7 +9,9 @@ import { hashPassword } from '../src/auth/password.js';
 import { deviationsFromCellMeans, interviewerCorrelation } from '../src/estimation/interviewer-correlation.js';
 import { outcomeRates } from '../src/estimation/outcome-rates.js';
 import { client, complete, pick, syncProject, type Targets } from './fieldwork-helpers.js';
+import { buildOpenApiDocument } from '../src/openapi/openapi-document.js';
 import { createOrg, PASSWORD, signIn, startApp, type Harness, type TestOrg } from './harness.js';
+import { conformanceProblems, responseSchema } from './openapi-conformance.js';
 
 let h: Harness;
 let org: TestOrg;
@@ -92,7 +94,11 @@ describe('interviewers’ rates', () => {
   });
 
   it('are for the office: supervisors and leads read them; interviewers and clients are refused', async () => {
-    expect((await (await client(h, org, 'lead')).get(ratesPath)).status).toBe(200);
+    const read = await (await client(h, org, 'lead')).get(ratesPath);
+    expect(read.status).toBe(200);
+    // The answer matches the OpenAPI document the client's types come from, exactly.
+    const doc = buildOpenApiDocument(h.app);
+    expect(conformanceProblems(doc, responseSchema(doc, 'get', '/api/projects/{projectId}/interviewers/rates', 200), read.body)).toEqual([]);
     expect((await interviewer.get(ratesPath)).status).toBe(403);
     expect((await (await client(h, org, 'client')).get(ratesPath)).status).toBe(403);
     const rival = await createOrg(h.db, 'RatesRival');
@@ -102,7 +108,10 @@ describe('interviewers’ rates', () => {
 
 describe('the interviewers’ effect on the balance', () => {
   it('is the correlation on answers minus their cell mean, and the all-sources design effect is Kish × the interviewer’s', async () => {
-    const balance = (await (await client(h, org, 'lead')).get(`/api/projects/${org.projectId}/balance`)).body;
+    const res = await (await client(h, org, 'lead')).get(`/api/projects/${org.projectId}/balance`);
+    const doc = buildOpenApiDocument(h.app);
+    expect(conformanceProblems(doc, responseSchema(doc, 'get', '/api/projects/{projectId}/balance', 200), res.body)).toEqual([]);
+    const balance = res.body;
     const effect = balance.interviewerEffect;
     const rows = people.flatMap((p, i) => [
       { interviewer: 'first', cell: JSON.stringify(p), value: i < 3 ? 1 : 0 },
