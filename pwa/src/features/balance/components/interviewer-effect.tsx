@@ -16,6 +16,7 @@ export function InterviewerEffect({ balance }: { balance: Balance }) {
           <div>
             <dt>Intra-interviewer correlation ρ̂</dt>
             <dd className="pl-figure">{formatDecimal(effect.rho, 3)}</dd>
+            {effect.rawRho < 0 ? <dd className="pl-small">estimated {formatDecimal(effect.rawRho, 3).replace('-', '−')}, set to 0</dd> : null}
           </div>
           <div>
             <dt>Weighted workload m*</dt>

@@ -33,6 +33,16 @@ describe('the interviewers’ effect on the balance', () => {
     expect(screen.getByText(/a negative estimate is set to 0/)).toBeInTheDocument();
   });
 
+  it('says when a negative estimate was set to 0', async () => {
+    const api = installFakeApi();
+    api.on('GET', '/api/projects', () => json([project]));
+    api.on('GET', '/api/projects/p1/balance', () => json({ ...balance, interviewerEffect: { ...balance.interviewerEffect, rho: 0, rawRho: -0.0042, designEffect: 1 } }));
+    await signedInAs('lead');
+    renderApp('/lead/balance');
+    const list = await screen.findByLabelText('Interviewer effect figures');
+    expect(within(list).getByText('Intra-interviewer correlation ρ̂').parentElement).toHaveTextContent('0.000estimated −0.004, set to 0');
+  });
+
   it('says when there are too few interviewers to tell', async () => {
     const api = installFakeApi();
     api.on('GET', '/api/projects', () => json([project]));

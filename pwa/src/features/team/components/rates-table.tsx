@@ -23,8 +23,8 @@ export function RatesTable({ rows, sort, onSort }: RatesTableProps) {
               const sorted = sort.column === column.key;
               return (
                 <th key={column.key} scope="col" aria-sort={sorted ? sort.direction : 'none'} className={column.numeric ? 'is-numeric' : undefined}>
-                  <button type="button" className="pl-sort" onClick={() => onSort(column.key)}>
-                    {column.label}
+                  <button type="button" className="pl-sort" aria-label={column.label} title={column.label} onClick={() => onSort(column.key)}>
+                    {column.short}
                     <span className="pl-sort-mark" aria-hidden="true">
                       {sorted ? (sort.direction === 'ascending' ? '▲' : '▼') : '↕'}
                     </span>

@@ -10,17 +10,18 @@ export interface RatesSort {
   direction: SortDirection;
 }
 
-export const ratesColumns: { key: RatesColumn; label: string; numeric: boolean }[] = [
-  { key: 'name', label: 'Interviewer', numeric: false },
-  { key: 'contacts', label: 'Contacts', numeric: true },
-  { key: 'completes', label: 'Completes', numeric: true },
-  { key: 'COOP1', label: 'Cooperation (COOP1)', numeric: true },
-  { key: 'REF2', label: 'Refusal (REF2)', numeric: true },
-  { key: 'CON2', label: 'Contact (CON2)', numeric: true },
-  { key: 'medianDurationSeconds', label: 'Median length', numeric: true },
-  { key: 'flags', label: 'Flags', numeric: true },
-  { key: 'adjustedPValue', label: 'Answer test, adjusted p', numeric: true },
-  { key: 'notConfirmed', label: 'Back-checks not confirmed', numeric: true },
+/** Each column's heading in the table (short) and in the phone's sort choice (in words). */
+export const ratesColumns: { key: RatesColumn; short: string; label: string; numeric: boolean }[] = [
+  { key: 'name', short: 'Interviewer', label: 'Interviewer', numeric: false },
+  { key: 'contacts', short: 'Contacts', label: 'Contacts', numeric: true },
+  { key: 'completes', short: 'Completes', label: 'Completes', numeric: true },
+  { key: 'COOP1', short: 'COOP1', label: 'Cooperation (COOP1)', numeric: true },
+  { key: 'REF2', short: 'REF2', label: 'Refusal (REF2)', numeric: true },
+  { key: 'CON2', short: 'CON2', label: 'Contact (CON2)', numeric: true },
+  { key: 'medianDurationSeconds', short: 'Median length', label: 'Median length', numeric: true },
+  { key: 'flags', short: 'Flags', label: 'Flags', numeric: true },
+  { key: 'adjustedPValue', short: 'Adjusted p', label: 'Answer test, adjusted p', numeric: true },
+  { key: 'notConfirmed', short: 'Not confirmed', label: 'Back-checks not confirmed', numeric: true },
 ];
 
 /** Timing findings on interviews not approved, plus one when the answer test flags them. */

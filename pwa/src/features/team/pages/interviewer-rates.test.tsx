@@ -56,7 +56,7 @@ describe('the interviewers’ rates', () => {
 
     await user.click(within(table).getByRole('button', { name: /Cooperation \(COOP1\)/ }));
     expect(names()).toEqual(['Bram Osei', 'Alys Fenwick']);
-    expect(within(table).getByRole('columnheader', { name: /Cooperation/ })).toHaveAttribute('aria-sort', 'descending');
+    expect(within(table).getByRole('columnheader', { name: /COOP1/ })).toHaveAttribute('aria-sort', 'descending');
     await user.click(within(table).getByRole('button', { name: /Cooperation \(COOP1\)/ }));
     expect(names()).toEqual(['Alys Fenwick', 'Bram Osei']);
 
