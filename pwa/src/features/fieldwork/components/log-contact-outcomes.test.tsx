@@ -42,6 +42,8 @@ describe('outcomes for the office’s rates', () => {
     const [entry] = await db.outbox.toArray();
     expect(entry!.payload).toMatchObject({ disposition: 'quota_full', categories: { 'v-age': 'c-young', 'v-region': 'c-mardon' } });
     expect(Object.keys(entry!.payload as object).sort()).toEqual(['categories', 'disposition', 'endedAt', 'id', 'startedAt']);
+    // Nothing half-logged is left to resume.
+    expect(await db.drafts.count()).toBe(0);
   });
 
   it('offers no turning away when the respondent’s cells are open', async () => {

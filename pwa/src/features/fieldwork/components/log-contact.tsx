@@ -178,10 +178,7 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
           syncedAt={status?.syncedAt ?? null}
           onStart={() => setStep('answer')}
           onBack={() => setStep('categories')}
-          onTurnAway={() => {
-            setDisposition('quota_full');
-            void save('quota_full');
-          }}
+          onTurnAway={() => void save('quota_full')}
           saving={saving}
         />
       ) : null}
