@@ -18,6 +18,7 @@ import type { AppConfig } from './config/config.js';
 import { ConfigModule } from './config/config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
+import { InterviewersModule } from './interviewers/interviewers.module.js';
 import { InterviewsModule } from './interviews/interviews.module.js';
 import { JobsModule } from './jobs/jobs.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
@@ -54,6 +55,7 @@ export class AppModule {
         QuotasModule,
         AssignmentsModule,
         InterviewsModule,
+        InterviewersModule,
         BalanceModule,
         QualityModule,
         JobsModule,

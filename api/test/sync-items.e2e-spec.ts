@@ -48,7 +48,7 @@ describe('one bad item never blocks a batch', () => {
       [{ headlineAnswer: null }, 'headlineAnswer is missing'],
       [{ categories: { ...someone(), [targets.variables[0]!.id]: { toString: 1 } } }, 'age: unknown category'],
       [{ categories: { ...someone(), [randomUUID()]: 'x' } }, 'names a quota variable this project does not have'],
-      [{ disposition: 'completed' }, 'disposition must be one of complete, partial, refusal, non_contact, other, not_eligible'],
+      [{ disposition: 'completed' }, 'disposition must be one of complete, partial, refusal, non_contact, other, not_eligible, quota_full'],
     ];
     const bad = faults.map(([change]) => ({ ...complete(someone()), ...change }));
     const res = await interviewer.post(syncPath, { interviews: [good[0], ...bad, good[1]] });

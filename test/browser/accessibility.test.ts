@@ -111,6 +111,7 @@ describe('accessibility and width at 360×640', () => {
       '/lead',
       '/lead/projects/new',
       `/lead/projects/${project}/quota-board`,
+      `/lead/projects/${project}/interviewers`,
       '/lead/balance',
       '/lead/benchmarks',
       '/lead/delivery',

@@ -11,6 +11,7 @@ import { summariseWeighting, type OutcomeRakingCell, type OutcomeSummary } from 
 import type { WithheldFigure } from '../estimation/withheld.js';
 import { loadActiveTargets, loadJointTable } from '../quotas/cell-allocator.js';
 import { loadCategoryMap } from '../quotas/category-map.js';
+import { interviewerEffect, type InterviewerCellCount, type InterviewerEffect } from './interviewer-effect.js';
 
 export interface BalanceMargin {
   variable: string;
@@ -60,6 +61,8 @@ export interface Balance {
   weightingProblem: string | null;
   /** Figures not given because they cannot be trusted, each with its reason (docs/methods.md, section 4). */
   withheld: WithheldFigure[];
+  /** The interviewers' effect on the headline answer; null with fewer than two interviewers with answers. */
+  interviewerEffect: InterviewerEffect | null;
   computedAt: string;
 }
 
@@ -101,21 +104,30 @@ export class BalanceService {
     const cells: OutcomeRakingCell[] = [];
     let excluded = 0;
     let notWeighted = 0;
-    for (const g of groups) {
+    // The categories a combination is weighted as, and whether a retired one of them is not weighted.
+    const weightedAs = (ids: string[]) => {
       const categories: Record<string, string> = {};
       let unmerged = false;
-      for (const id of g.category_ids) {
+      for (const id of ids) {
         const m = meaning.get(id);
         if (!m || !activeVariables.has(m.variableId)) continue;
-        if (m.retired) inRetired.set(id, (inRetired.get(id) ?? 0) + g.n);
         const known = m.countsAs ? labelOf.get(m.countsAs) : undefined;
         if (known) categories[known.variable] = known.label;
         else unmerged = true;
       }
+      return { categories, unmerged, weighted: !unmerged && Object.keys(categories).length === variables.length };
+    };
+    for (const g of groups) {
+      for (const id of g.category_ids) {
+        const m = meaning.get(id);
+        if (m?.retired && activeVariables.has(m.variableId)) inRetired.set(id, (inRetired.get(id) ?? 0) + g.n);
+      }
+      const { categories, unmerged } = weightedAs(g.category_ids);
       if (unmerged) notWeighted += g.n;
       else if (Object.keys(categories).length < variables.length) excluded += g.n;
       else cells.push({ categories, count: g.n, successes: g.yes, answered: g.n - g.dont_know - g.no_answer, dontKnow: g.dont_know });
     }
+    const perInterviewer = await this.interviewerCells(project.id, weightedAs);
     const retired = [...inRetired].map(([id, interviews]) => {
       const m = meaning.get(id)!;
       const choices = (variables.find((v) => v.id === m.variableId)?.categories ?? []).map((c) => ({ id: c.id, label: c.label }));
@@ -152,6 +164,7 @@ export class BalanceService {
       outcome: answered > 0 ? { column: 'headline', unweighted: yes / answered, answered } : null,
       weightingProblem: null,
       withheld: [],
+      interviewerEffect: interviewerEffect(perInterviewer, null, n),
       computedAt: new Date().toISOString(),
     };
     const problem = this.weightingProblem(targets, base.margins, n);
@@ -174,11 +187,25 @@ export class BalanceService {
         margins: summary.margins,
         outcome: summary.outcome ? { column: 'headline', ...summary.outcome } : base.outcome,
         withheld: summary.withheld,
+        interviewerEffect: interviewerEffect(perInterviewer, summary.designEffect, n),
       };
     } catch (error) {
       if (error instanceof EstimationInputError) return { ...base, weightingProblem: error.message };
       throw error;
     }
+  }
+
+  /** Each interviewer's weighted completes that answered yes or no, per weighting cell (from interviewer_counts). */
+  private async interviewerCells(
+    projectId: string,
+    weightedAs: (ids: string[]) => { categories: Record<string, string>; weighted: boolean },
+  ): Promise<InterviewerCellCount[]> {
+    const rows = await this.db('interviewer_counts').where({ project_id: projectId }).where('n', '>', 0).select('interviewer_id', 'category_ids', 'n', 'yes', 'dont_know', 'no_answer');
+    return rows.flatMap((r) => {
+      const { categories, weighted } = weightedAs(r.category_ids);
+      const cell = JSON.stringify(Object.entries(categories).sort(([a], [b]) => a.localeCompare(b)));
+      return weighted ? [{ interviewer: r.interviewer_id, cell, yes: r.yes, answered: r.n - r.dont_know - r.no_answer }] : [];
+    });
   }
 
   /** Labels of interlocked cells with a target that no counted interview falls in. */

@@ -122,7 +122,8 @@ export interface QuotaCellRow {
   closed_by: string | null;
 }
 
-export const DISPOSITIONS = ['complete', 'partial', 'refusal', 'non_contact', 'other', 'not_eligible'] as const;
+/** Contact outcomes; 'quota_full' is "turned away: cell full" (migration 20261202006400). */
+export const DISPOSITIONS = ['complete', 'partial', 'refusal', 'non_contact', 'other', 'not_eligible', 'quota_full'] as const;
 export type Disposition = (typeof DISPOSITIONS)[number];
 
 /** Answers to the headline question (migration 20261202004000); the share is over yes and no. */
@@ -136,6 +137,8 @@ export interface InterviewRow {
   disposition: Disposition;
   category_ids: string[];
   headline_answer: HeadlineAnswer | null;
+  /** Non-contacts and 'other' only: true when someone eligible is known to live there; null or false: unknown. */
+  eligibility_known: boolean | null;
   started_at: Date;
   ended_at: Date;
   field_day: string;

@@ -8,7 +8,9 @@ import { Logger } from '@nestjs/common';
 import type { Knex } from 'knex';
 import type { InterviewRow } from '../database/tables.js';
 
-export type NewInterview = Omit<InterviewRow, 'received_at' | 'review_status' | 'counted' | 'voided_at' | 'voided_by' | 'void_reason'>;
+export type NewInterview = Omit<InterviewRow, 'received_at' | 'review_status' | 'counted' | 'voided_at' | 'voided_by' | 'void_reason' | 'eligibility_known'> & {
+  eligibility_known?: boolean | null;
+};
 
 export interface InsertOutcome {
   /** Ids this statement stored. */

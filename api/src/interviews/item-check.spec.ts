@@ -143,7 +143,7 @@ describe('categories against the project’s targets', () => {
     ],
   };
   const item = (over: Partial<CheckedItem>): CheckedItem => ({
-    id: randomUUID(), disposition: 'complete', categories: { 'v-age': 'c-young' }, headlineAnswer: 'yes', startedAt: new Date(), endedAt: new Date(), ...over,
+    id: randomUUID(), disposition: 'complete', categories: { 'v-age': 'c-young' }, headlineAnswer: 'yes', eligibilityKnown: null, startedAt: new Date(), endedAt: new Date(), ...over,
   });
 
   it('gives the category ids, and plain reasons without raw ids', () => {

@@ -15,6 +15,8 @@ export interface CheckedItem {
   disposition: Disposition;
   categories: Record<string, unknown>;
   headlineAnswer: HeadlineAnswer | undefined;
+  /** Non-contacts and 'other' only: someone eligible is known to live there (else unknown, null). */
+  eligibilityKnown: boolean | null;
   startedAt: Date;
   endedAt: Date;
 }
@@ -60,6 +62,9 @@ export function parseMoment(field: string, value: unknown): Moment {
   return { ok: true, at: new Date(local.getTime() - sign * (offsetHours * 60 + offsetMinutes) * 60_000) };
 }
 
+/** The outcomes whose eligibility may be unknown (AAPOR's NC or UH, O or UO). */
+const ELIGIBILITY_ASKED = new Set<Disposition>(['non_contact', 'other']);
+
 /** Unknown fields are named in the reason only when the name reads as a field name. */
 const FIELD_NAME = /^[A-Za-z][A-Za-z0-9_]{0,39}$/;
 
@@ -90,6 +95,10 @@ export function checkItem(raw: unknown): ItemCheck {
     const ended = parseMoment('endedAt', dto.endedAt);
     if (!ended.ok) return { ok: false, id, reason: ended.reason };
     if (ended.at < started.at) return { ok: false, id, reason: 'endedAt is before startedAt' };
+    const eligibility = dto.eligibilityKnown ?? null;
+    if (eligibility !== null && !ELIGIBILITY_ASKED.has(dto.disposition)) {
+      return { ok: false, id, reason: 'eligibilityKnown is only for a non-contact or an other outcome' };
+    }
     const categories: Record<string, unknown> = {};
     for (const [key, value] of Object.entries(dto.categories ?? {})) {
       if (Object.hasOwn(categories, key.toLowerCase())) return { ok: false, id, reason: 'names one quota variable twice' };
@@ -100,6 +109,7 @@ export function checkItem(raw: unknown): ItemCheck {
       disposition: dto.disposition,
       categories,
       headlineAnswer: typeof dto.headlineAnswer === 'boolean' ? (dto.headlineAnswer ? 'yes' : 'no') : (dto.headlineAnswer ?? undefined),
+      eligibilityKnown: eligibility,
       startedAt: started.at,
       endedAt: ended.at,
     };

@@ -60,7 +60,7 @@ interface ReadBeforeLock {
 
 /** What an interview says, to tell a repeat of the same interview from a different one with its id. */
 const fingerprint = (item: CheckedItem) =>
-  JSON.stringify([item.disposition, Object.entries(item.categories).sort(), item.headlineAnswer ?? null, +item.startedAt, +item.endedAt]);
+  JSON.stringify([item.disposition, Object.entries(item.categories).sort(), item.headlineAnswer ?? null, item.eligibilityKnown, +item.startedAt, +item.endedAt]);
 
 @Injectable()
 export class SyncService {
@@ -154,6 +154,7 @@ export class SyncService {
         disposition: item.disposition,
         category_ids: categories,
         headline_answer: item.disposition === 'complete' ? (item.headlineAnswer ?? null) : null,
+        eligibility_known: item.eligibilityKnown,
         started_at: item.startedAt,
         ended_at: item.endedAt,
         field_day: day,

@@ -32,7 +32,8 @@ export interface StoredSession {
   user: SessionUser;
 }
 
-export type Disposition = 'complete' | 'partial' | 'refusal' | 'non_contact' | 'other' | 'not_eligible';
+/** 'quota_full' is "turned away: cell full", logged from the cell check of a complete. */
+export type Disposition = 'complete' | 'partial' | 'refusal' | 'non_contact' | 'other' | 'not_eligible' | 'quota_full';
 
 /** Answers to the headline question; the headline share is over yes and no. */
 export type HeadlineAnswer = 'yes' | 'no' | 'dont_know' | 'no_answer';
@@ -45,6 +46,8 @@ export interface InterviewRecord {
   categories?: Record<string, string>;
   /** true and false are what an older app stored; the server reads them as yes and no. */
   headlineAnswer?: HeadlineAnswer | boolean;
+  /** Non-contacts and 'other' only: true when someone eligible is known to live there, false when not known. */
+  eligibilityKnown?: boolean;
   startedAt: string;
   endedAt: string;
 }
@@ -98,6 +101,7 @@ export interface ContactDraft {
   categories: Record<string, string>;
   /** true and false are what an older app stored (yes and no). */
   headlineAnswer?: HeadlineAnswer | boolean;
+  eligibilityKnown?: boolean;
   /** When the contact was started (becomes the interview's startedAt). */
   startedAt: string;
   updatedAt: string;

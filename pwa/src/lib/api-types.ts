@@ -369,6 +369,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/interviewers/rates": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["InterviewersController_rates"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{projectId}/interviews/{interviewId}/void": {
         parameters: {
             query?: never;
@@ -645,6 +661,24 @@ export interface paths {
 export type webhooks = Record<string, never>;
 export interface components {
     schemas: {
+        AaporGroupsResponse: {
+            /** @description Complete interviews */
+            I: number;
+            /** @description Non-contacts where someone eligible is known to live */
+            NC: number;
+            /** @description Not eligible, turned away because the cell was full included */
+            NE: number;
+            /** @description Other outcomes of known eligibility */
+            O: number;
+            /** @description Partial interviews */
+            P: number;
+            /** @description Refusals */
+            R: number;
+            /** @description Non-contacts of unknown eligibility */
+            UH: number;
+            /** @description Other outcomes of unknown eligibility */
+            UO: number;
+        };
         AcceptedItemResponse: {
             /** @description Kept but flagged for the supervisor */
             flags: components["schemas"]["FlagCode"][];
@@ -691,6 +725,18 @@ export interface components {
             raiseAfterNotConfirmed: number;
             /** @example 0.1 */
             share: number;
+        };
+        BackcheckTallyResponse: {
+            /** @description Confirmed */
+            confirmed: number;
+            /** @description Not confirmed */
+            notConfirmed: number;
+            /** @description Could not reach */
+            notReached: number;
+            /** @description No outcome yet */
+            pending: number;
+            /** @description Interviews selected for a back-check */
+            selected: number;
         };
         BalanceMarginResponse: {
             /** @example 18-24 */
@@ -745,6 +791,8 @@ export interface components {
             /** @description Completes left out because they lack a category of a variable added later */
             excluded: number;
             headlineQuestion: string;
+            /** @description Null with fewer than two interviewers with answers */
+            interviewerEffect: components["schemas"]["InterviewerEffectResponse"] | null;
             iterations: number | null;
             margins: components["schemas"]["BalanceMarginResponse"][];
             maxMarginError: number | null;
@@ -806,6 +854,15 @@ export interface components {
         ChangeRoleDto: {
             /** @enum {string} */
             role: "admin" | "lead" | "supervisor" | "interviewer" | "client";
+        };
+        ContactFiguresResponse: {
+            /** @description Counted completes */
+            completes: number;
+            /** @description Contacts, neither voided nor rejected */
+            contacts: number;
+            groups: components["schemas"]["AaporGroupsResponse"];
+            outcomes: components["schemas"]["OutcomeMixResponse"];
+            rates: components["schemas"]["ShownRatesResponse"];
         };
         CreateProjectDto: {
             /**
@@ -898,6 +955,42 @@ export interface components {
             /** @example 20 */
             minimumCompletes: number;
         };
+        InterviewerDayResponse: {
+            /** @description Counted completes */
+            completes: number;
+            /** @description Contacts, neither voided nor rejected */
+            contacts: number;
+            /**
+             * Format: date
+             * @example 2026-11-20
+             */
+            fieldDay: string;
+            groups: components["schemas"]["AaporGroupsResponse"];
+            /** @description Median length of the day’s counted completes, in seconds */
+            medianDurationSeconds: number | null;
+            outcomes: components["schemas"]["OutcomeMixResponse"];
+            rates: components["schemas"]["ShownRatesResponse"];
+        };
+        InterviewerEffectResponse: {
+            /** @description Kish's weighting design effect × the interviewer design effect; null until weights are computed */
+            allSourcesDesignEffect: number | null;
+            /** @description The interviews used over the all-sources design effect */
+            allSourcesEffectiveSampleSize: number | null;
+            /** @description Interviewer design effect 1 + ρ̂·(m* − 1) */
+            designEffect: number;
+            /** @description Interviewers with answers */
+            interviewers: number;
+            /** @description Weighted completes that answered yes or no */
+            interviews: number;
+            /** @description m₀ = (n − Σm_j²/n) / (J − 1) */
+            m0: number;
+            /** @description m* = Σm_j²/n, the workload-weighted mean workload */
+            mStar: number;
+            /** @description ρ̂ before negative estimates are set to 0 */
+            rawRho: number;
+            /** @description Intra-interviewer correlation ρ̂ (Kish 1962, one-way ANOVA), negative estimates set to 0 */
+            rho: number;
+        };
         InterviewerProgressResponse: {
             /** @description Counted completes on the project's field day today */
             completesToday: number;
@@ -908,18 +1001,32 @@ export interface components {
             name: string;
             overQuota: number;
         };
-        InterviewerTestResponse: {
-            /** @description Benjamini–Hochberg adjusted p-value; null when not tested */
-            adjustedPValue: number | null;
-            /** @description Counted completes that answered the headline question yes or no */
+        InterviewerRatesResponse: {
+            backchecks: components["schemas"]["BackcheckTallyResponse"];
+            /** @description Counted completes */
             completes: number;
-            flagged: boolean;
+            /** @description Contacts, neither voided nor rejected */
+            contacts: number;
+            days: components["schemas"]["InterviewerDayResponse"][];
+            findings: components["schemas"]["RuleCountResponse"][];
+            groups: components["schemas"]["AaporGroupsResponse"];
             /** Format: uuid */
             interviewerId: string;
+            /** @description Median length of counted completes, in seconds */
+            medianDurationSeconds: number | null;
+            /** @example Ada Fenwick */
             name: string;
-            /** @description Cochran–Mantel–Haenszel p-value; null when not tested */
+            outcomes: components["schemas"]["OutcomeMixResponse"];
+            rates: components["schemas"]["ShownRatesResponse"];
+            test: components["schemas"]["InterviewerTestResponse"] | null;
+        };
+        InterviewerTestResponse: {
+            /** @description Benjamini–Hochberg adjusted */
+            adjustedPValue: number | null;
+            /** @description Completes tested */
+            completes: number;
+            flagged: boolean;
             pValue: number | null;
-            /** @description The result in words, with the figures behind it */
             reason: string;
         };
         InvitePersonDto: {
@@ -1009,6 +1116,22 @@ export interface components {
             /** @description The same share after raking */
             weighted: number;
         };
+        OutcomeMixResponse: {
+            /** @description Completes */
+            complete: number;
+            /** @description Non-contacts */
+            non_contact: number;
+            /** @description Not eligible */
+            not_eligible: number;
+            /** @description Other outcomes */
+            other: number;
+            /** @description Partials */
+            partial: number;
+            /** @description Turned away: cell full */
+            quota_full: number;
+            /** @description Refusals */
+            refusal: number;
+        };
         OutOfHoursDto: {
             enabled: boolean;
             /** @example 08:00 */
@@ -1096,6 +1219,16 @@ export interface components {
              * @enum {string}
              */
             status: "invited" | "active" | "disabled";
+        };
+        ProjectInterviewerRatesResponse: {
+            /** @description Eligible share of unknown-eligibility cases, estimated once from the whole project */
+            e: number | null;
+            interviewers: components["schemas"]["InterviewerRatesResponse"][];
+            /** @description The whole project */
+            project: components["schemas"]["ContactFiguresResponse"];
+            /** Format: uuid */
+            projectId: string;
+            rateNames: ("COOP1" | "REF2" | "CON2")[];
         };
         ProjectListItemResponse: {
             /**
@@ -1271,17 +1404,10 @@ export interface components {
         /** @enum {string} */
         Role: "admin" | "lead" | "supervisor" | "interviewer" | "client";
         RuleCountResponse: {
-            /**
-             * @example too_short
-             * @enum {string}
-             */
-            code: "too_short" | "overlapping" | "out_of_hours" | "burst" | "interviewer_answers" | "backcheck_not_confirmed";
-            /** @description One sentence saying what trips the flag */
-            explanation: string;
-            /** @description Interviews carrying the flag, approved ones left out */
-            interviews: number;
-            /** @example Too short */
-            label: string;
+            /** @description Interviews not approved that the rule found */
+            count: number;
+            /** @example too_short */
+            rule: string;
         };
         SaveTargetsDto: {
             /** @description Joint shares of the interlocked variables (every combination); without them cell targets are the product of the margins */
@@ -1318,6 +1444,14 @@ export interface components {
             password: string;
             /** @description The part of the link after "#token=" */
             token: string;
+        };
+        ShownRatesResponse: {
+            /** @description AAPOR CON2: ((I+P)+R+O) / ((I+P)+R+O+NC + e(UH+UO)) */
+            CON2: number | null;
+            /** @description AAPOR COOP1: I / ((I+P) + R + O) */
+            COOP1: number | null;
+            /** @description AAPOR REF2: R / ((I+P) + (R+NC+O) + e(UH+UO)) */
+            REF2: number | null;
         };
         SignUpDto: {
             /** @example rhea@harrowby-field.example */
@@ -1565,9 +1699,11 @@ export interface components {
     headers: never;
     pathItems: never;
 }
+export type AaporGroupsResponse = components['schemas']['AaporGroupsResponse'];
 export type AcceptedItemResponse = components['schemas']['AcceptedItemResponse'];
 export type AssignmentResponse = components['schemas']['AssignmentResponse'];
 export type BackChecksDto = components['schemas']['BackChecksDto'];
+export type BackcheckTallyResponse = components['schemas']['BackcheckTallyResponse'];
 export type BalanceMarginResponse = components['schemas']['BalanceMarginResponse'];
 export type BalanceOutcomeResponse = components['schemas']['BalanceOutcomeResponse'];
 export type BalanceResponse = components['schemas']['BalanceResponse'];
@@ -1576,6 +1712,7 @@ export type CellResponse = components['schemas']['CellResponse'];
 export type CellsResponse = components['schemas']['CellsResponse'];
 export type CellStatus = components['schemas']['CellStatus'];
 export type ChangeRoleDto = components['schemas']['ChangeRoleDto'];
+export type ContactFiguresResponse = components['schemas']['ContactFiguresResponse'];
 export type CreateProjectDto = components['schemas']['CreateProjectDto'];
 export type CreateUserDto = components['schemas']['CreateUserDto'];
 export type DuplicateItemResponse = components['schemas']['DuplicateItemResponse'];
@@ -1585,7 +1722,10 @@ export type FlagCountResponse = components['schemas']['FlagCountResponse'];
 export type FlaggedInterviewsResponse = components['schemas']['FlaggedInterviewsResponse'];
 export type HealthResponse = components['schemas']['HealthResponse'];
 export type InterviewerAnswersDto = components['schemas']['InterviewerAnswersDto'];
+export type InterviewerDayResponse = components['schemas']['InterviewerDayResponse'];
+export type InterviewerEffectResponse = components['schemas']['InterviewerEffectResponse'];
 export type InterviewerProgressResponse = components['schemas']['InterviewerProgressResponse'];
+export type InterviewerRatesResponse = components['schemas']['InterviewerRatesResponse'];
 export type InterviewerTestResponse = components['schemas']['InterviewerTestResponse'];
 export type InvitePersonDto = components['schemas']['InvitePersonDto'];
 export type JointShareDto = components['schemas']['JointShareDto'];
@@ -1599,6 +1739,7 @@ export type MessageResponse = components['schemas']['MessageResponse'];
 export type OrganisationRefResponse = components['schemas']['OrganisationRefResponse'];
 export type OtherAnswer = components['schemas']['OtherAnswer'];
 export type OtherAnswerResponse = components['schemas']['OtherAnswerResponse'];
+export type OutcomeMixResponse = components['schemas']['OutcomeMixResponse'];
 export type OutOfHoursDto = components['schemas']['OutOfHoursDto'];
 export type OwnAssignmentResponse = components['schemas']['OwnAssignmentResponse'];
 export type OwnProgressResponse = components['schemas']['OwnProgressResponse'];
@@ -1607,6 +1748,7 @@ export type ParsedTargetsResponse = components['schemas']['ParsedTargetsResponse
 export type ParsedVariableResponse = components['schemas']['ParsedVariableResponse'];
 export type PasswordSetResponse = components['schemas']['PasswordSetResponse'];
 export type PersonResponse = components['schemas']['PersonResponse'];
+export type ProjectInterviewerRatesResponse = components['schemas']['ProjectInterviewerRatesResponse'];
 export type ProjectListItemResponse = components['schemas']['ProjectListItemResponse'];
 export type ProjectMemberResponse = components['schemas']['ProjectMemberResponse'];
 export type ProjectResponse = components['schemas']['ProjectResponse'];
@@ -1627,6 +1769,7 @@ export type SessionResponse = components['schemas']['SessionResponse'];
 export type SetAssignmentDto = components['schemas']['SetAssignmentDto'];
 export type SetMembersDto = components['schemas']['SetMembersDto'];
 export type SetPasswordDto = components['schemas']['SetPasswordDto'];
+export type ShownRatesResponse = components['schemas']['ShownRatesResponse'];
 export type SignUpDto = components['schemas']['SignUpDto'];
 export type SignUpResponse = components['schemas']['SignUpResponse'];
 export type SignUpSettingsResponse = components['schemas']['SignUpSettingsResponse'];
@@ -2272,6 +2415,27 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["CellResponse"];
+                };
+            };
+        };
+    };
+    InterviewersController_rates: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProjectInterviewerRatesResponse"];
                 };
             };
         };

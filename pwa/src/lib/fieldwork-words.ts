@@ -8,6 +8,7 @@ export const dispositionWords: Record<Disposition, string> = {
   non_contact: 'Non-contact',
   other: 'Other',
   not_eligible: 'Not eligible',
+  quota_full: 'Turned away: cell full',
 };
 
 /** One line under each outcome on the log-contact screen. */
@@ -18,8 +19,10 @@ export const dispositionHints: Record<Disposition, string> = {
   non_contact: 'Nobody reached',
   other: 'Anything else',
   not_eligible: 'Not in the survey’s population',
+  quota_full: 'Their cell was full, so no interview',
 };
 
+/** The outcomes offered first; 'quota_full' is logged from the cell check, once the respondent's cells are known. */
 export const dispositionOrder: Disposition[] = ['complete', 'partial', 'refusal', 'non_contact', 'other', 'not_eligible'];
 
 export const cellStatusWords: Record<CellStatus, string> = {

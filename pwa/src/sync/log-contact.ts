@@ -13,9 +13,11 @@ export async function logContact(interviewerId: string, projectId: string, draft
   // A complete carries every category and the answer; a partial or refusal may carry the
   // categories the interviewer could see (for comparing nonresponse by cell); others neither.
   if (record.disposition !== 'complete') delete record.headlineAnswer;
-  if (!['complete', 'partial', 'refusal'].includes(record.disposition) || Object.keys(record.categories ?? {}).length === 0) {
+  // Turned away because the cell was full keeps the categories that showed it.
+  if (!['complete', 'partial', 'refusal', 'quota_full'].includes(record.disposition) || Object.keys(record.categories ?? {}).length === 0) {
     delete record.categories;
   }
+  if (!['non_contact', 'other'].includes(record.disposition)) delete record.eligibilityKnown;
   await addToOutbox(interviewerId, projectId, record);
   void syncNow();
   return record;

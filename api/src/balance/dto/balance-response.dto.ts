@@ -2,6 +2,7 @@ import { ApiProperty, ApiPropertyOptional, type ApiPropertyOptions } from '@nest
 import { WITHHELD_FIGURES, type WithheldFigure, type WithheldFigureName } from '../../estimation/withheld.js';
 import type { OtherAnswerShare } from '../../estimation/weighting-summary.js';
 import type { Balance, BalanceMargin, RetiredCategory } from '../balance.service.js';
+import { InterviewerEffectResponse } from './interviewer-effect-response.dto.js';
 
 // Shares are proportions (0–1) everywhere; docs/methods.md defines every figure.
 
@@ -173,6 +174,9 @@ export class BalanceResponse implements Balance {
 
   @ApiProperty({ type: () => [WithheldFigureResponse], description: 'Figures not given because they cannot be trusted, each with its reason' })
   withheld: WithheldFigureResponse[];
+
+  @ApiProperty({ type: () => InterviewerEffectResponse, nullable: true, description: 'Null with fewer than two interviewers with answers' })
+  interviewerEffect: InterviewerEffectResponse | null;
 
   @ApiProperty({ format: 'date-time' })
   computedAt: string;

@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { ArrayMaxSize, IsArray, IsIn, IsString, IsObject, IsOptional } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsString, IsObject, IsOptional } from 'class-validator';
 import { DISPOSITIONS, HEADLINE_ANSWERS, type Disposition, type HeadlineAnswer } from '../../database/tables.js';
 
 export const SYNC_BATCH_LIMIT = 1000;
@@ -37,6 +37,11 @@ export class InterviewItemDto {
   @IsOptional()
   @IsIn([...HEADLINE_ANSWERS, true, false], { message: `headlineAnswer must be one of ${HEADLINE_ANSWERS.join(', ')}` })
   headlineAnswer?: HeadlineAnswer | boolean;
+
+  @ApiPropertyOptional({ description: 'Non-contacts and other outcomes only: true when someone eligible is known to live there; left out or false when that is unknown' })
+  @IsOptional()
+  @IsBoolean({ message: 'eligibilityKnown must be true or false' })
+  eligibilityKnown?: boolean;
 
   // Read in full (RFC 3339, plausible year) by item-check.ts, which names what is wrong.
   @ApiProperty({ example: '2026-11-20T10:02:00Z', description: 'RFC 3339 date and time with Z or an offset' })

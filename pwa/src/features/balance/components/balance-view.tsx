@@ -9,6 +9,7 @@ import { BalanceCautions } from './balance-cautions';
 import { BalanceFigures } from './balance-figures';
 import { FiguresMethods } from './figures-methods';
 import { HeadlineShare } from './headline-share';
+import { InterviewerEffect } from './interviewer-effect';
 import { RetiredCategories } from './retired-categories';
 import { SampleMix } from './sample-mix';
 
@@ -76,6 +77,7 @@ function BalanceContent({ projectId, balance, targetSize, checkedAt }: { project
       <section className="pl-section" aria-labelledby="pl-precision-heading">
         <h2 id="pl-precision-heading" className="pl-section-title">What weighting costs</h2>
         <BalanceFigures balance={balance} />
+        <InterviewerEffect balance={balance} />
       </section>
 
       <section className="pl-section" aria-labelledby="pl-mix-heading">

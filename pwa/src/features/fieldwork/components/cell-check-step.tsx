@@ -10,10 +10,13 @@ interface CellCheckStepProps {
   syncedAt: string | null;
   onStart: () => void;
   onBack: () => void;
+  /** Logs the contact as turned away because the cell is full (offered when one is full or closed). */
+  onTurnAway: () => void;
+  saving: boolean;
 }
 
 /** Step 3 of a complete, before the interview proper: are the respondent's cells still open? */
-export function CellCheckStep({ cells, syncedAt, onStart, onBack }: CellCheckStepProps) {
+export function CellCheckStep({ cells, syncedAt, onStart, onBack, onTurnAway, saving }: CellCheckStepProps) {
   const [confirming, setConfirming] = useState(false);
   const blocking = blockingCells(cells);
   const nearlyFull = cells.some((cell) => cell.status === 'nearly_full');
@@ -58,6 +61,11 @@ export function CellCheckStep({ cells, syncedAt, onStart, onBack }: CellCheckSte
         >
           Start the interview
         </button>
+        {blocking.length > 0 ? (
+          <button type="button" className="pl-button pl-button-quiet pl-button-wide" disabled={saving} onClick={onTurnAway}>
+            Turn away: cell full
+          </button>
+        ) : null}
         <button type="button" className="pl-button pl-button-quiet pl-button-wide" onClick={onBack}>
           Change their categories
         </button>

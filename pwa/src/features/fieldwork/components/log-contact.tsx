@@ -14,6 +14,7 @@ import { AnswerStep } from './answer-step';
 import { AssignedCellsNote } from './assigned-cells-note';
 import { CategoriesStep } from './categories-step';
 import { CellCheckStep } from './cell-check-step';
+import { EligibilityQuestion } from './eligibility-question';
 import { ObservedCategories } from './observed-categories';
 import { OutcomeStep } from './outcome-step';
 import { FormProblem } from '../../../components/form-problem';
@@ -21,6 +22,8 @@ import { stepAnnouncement } from './log-steps';
 
 /** Outcomes where the interviewer met someone and may record the categories they could see. */
 const OBSERVABLE = new Set<Disposition>(['partial', 'refusal']);
+/** Outcomes where nobody was interviewed and it may not be known whether someone eligible lives there. */
+const ELIGIBILITY_ASKED = new Set<Disposition>(['non_contact', 'other']);
 
 interface LogContactProps {
   userId: string;
@@ -39,6 +42,7 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
   const [disposition, setDisposition] = useState<Disposition>(draft?.disposition ?? 'complete');
   const [categories, setCategories] = useState<Record<string, string>>(draft?.categories ?? {});
   const [answer, setAnswer] = useState<HeadlineAnswer | undefined>(headlineAnswerOf(draft?.headlineAnswer));
+  const [eligibilityKnown, setEligibilityKnown] = useState<boolean | undefined>(draft?.eligibilityKnown);
   const [saving, setSaving] = useState(false);
   const [problem, setProblem] = useState<string>();
   const variables = status?.variables ?? [];
@@ -67,8 +71,8 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
       started.current = true;
       return;
     }
-    void saveDraft({ interviewerId: userId, projectId: project.id, step, disposition, categories, headlineAnswer: answer, startedAt });
-  }, [userId, project.id, step, disposition, categories, answer, startedAt]);
+    void saveDraft({ interviewerId: userId, projectId: project.id, step, disposition, categories, headlineAnswer: answer, eligibilityKnown, startedAt });
+  }, [userId, project.id, step, disposition, categories, answer, eligibilityKnown, startedAt]);
 
   function cancel() {
     void discardDraft(userId).then(() => onCancel(startedAt));
@@ -87,7 +91,8 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
         disposition: chosen,
         startedAt,
         ...(chosen === 'complete' ? { categories, headlineAnswer: answer } : {}),
-        ...(OBSERVABLE.has(chosen) && Object.keys(categories).length > 0 ? { categories } : {}),
+        ...((OBSERVABLE.has(chosen) || chosen === 'quota_full') && Object.keys(categories).length > 0 ? { categories } : {}),
+        ...(ELIGIBILITY_ASKED.has(chosen) && eligibilityKnown !== undefined ? { eligibilityKnown } : {}),
       });
       onSaved(`${dispositionWords[chosen]} saved on this device.`, startedAt);
     } catch (error) {
@@ -133,6 +138,7 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
               }
             />
           ) : null}
+          {ELIGIBILITY_ASKED.has(disposition) ? <EligibilityQuestion value={eligibilityKnown} onChange={setEligibilityKnown} /> : null}
           <div className="pl-step-actions">
             <button type="button" className="pl-button pl-button-main pl-button-wide" disabled={saving} onClick={() => void save(disposition)}>
               Save {dispositionWords[disposition].toLowerCase()}
@@ -172,6 +178,8 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
           syncedAt={status?.syncedAt ?? null}
           onStart={() => setStep('answer')}
           onBack={() => setStep('categories')}
+          onTurnAway={() => void save('quota_full')}
+          saving={saving}
         />
       ) : null}
 
