@@ -17,6 +17,8 @@ export interface CheckedItem {
   headlineAnswer: HeadlineAnswer | undefined;
   startedAt: Date;
   endedAt: Date;
+  /** Contact-sheet code for a back-check (kept only if the interview is selected). */
+  respondentReference?: string;
 }
 
 export type ItemCheck = { ok: true; item: CheckedItem } | { ok: false; id: string | null; reason: string };
@@ -102,6 +104,7 @@ export function checkItem(raw: unknown): ItemCheck {
       headlineAnswer: typeof dto.headlineAnswer === 'boolean' ? (dto.headlineAnswer ? 'yes' : 'no') : (dto.headlineAnswer ?? undefined),
       startedAt: started.at,
       endedAt: ended.at,
+      ...(dto.respondentReference === undefined ? {} : { respondentReference: dto.respondentReference }),
     };
     return { ok: true, item };
   } catch {
