@@ -95,7 +95,7 @@ describe('accessibility and width at 360×640', () => {
 
   it('holds on the supervisor’s pages and the close-cell dialog', async () => {
     const page = await asRole('supervisor@vellmoor.example', '/supervisor');
-    const problems = await checkPages(page, ['/supervisor/review', '/supervisor/interviewers', '/supervisor']);
+    const problems = await checkPages(page, ['/supervisor/review', '/supervisor/interviewers', '/supervisor/backchecks', '/supervisor']);
     await page.getByRole('button', { name: /^Close cell / }).first().click();
     const dialog = page.getByRole('dialog', { name: 'Close this cell?' });
     await dialog.waitFor();
