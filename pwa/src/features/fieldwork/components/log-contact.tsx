@@ -10,12 +10,14 @@ import { dispositionWords, headlineAnswerOf } from '../../../lib/fieldwork-words
 import { respondentCells } from '../../../sync/cell-status';
 import { logContact } from '../../../sync/log-contact';
 import type { ProjectCellStatus } from '../hooks/use-field-status';
+import { referenceProblem } from '@plumbline/cell-rules/respondent-reference';
 import { AnswerStep } from './answer-step';
 import { AssignedCellsNote } from './assigned-cells-note';
 import { CategoriesStep } from './categories-step';
 import { CellCheckStep } from './cell-check-step';
 import { ObservedCategories } from './observed-categories';
 import { OutcomeStep } from './outcome-step';
+import { ReferenceField } from './reference-field';
 import { FormProblem } from '../../../components/form-problem';
 import { stepAnnouncement } from './log-steps';
 
@@ -39,6 +41,8 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
   const [disposition, setDisposition] = useState<Disposition>(draft?.disposition ?? 'complete');
   const [categories, setCategories] = useState<Record<string, string>>(draft?.categories ?? {});
   const [answer, setAnswer] = useState<HeadlineAnswer | undefined>(headlineAnswerOf(draft?.headlineAnswer));
+  const [reference, setReference] = useState('');
+  const [referenceMistake, setReferenceMistake] = useState<string>();
   const [saving, setSaving] = useState(false);
   const [problem, setProblem] = useState<string>();
   const variables = status?.variables ?? [];
@@ -80,13 +84,17 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
   );
 
   async function save(chosen: Disposition) {
+    const code = reference.trim();
+    const mistake = chosen === 'complete' && code ? (referenceProblem(code) ?? undefined) : undefined;
+    setReferenceMistake(mistake);
+    if (mistake) return;
     setSaving(true);
     setProblem(undefined);
     try {
       await logContact(userId, project.id, {
         disposition: chosen,
         startedAt,
-        ...(chosen === 'complete' ? { categories, headlineAnswer: answer } : {}),
+        ...(chosen === 'complete' ? { categories, headlineAnswer: answer, ...(code ? { respondentReference: code } : {}) } : {}),
         ...(OBSERVABLE.has(chosen) && Object.keys(categories).length > 0 ? { categories } : {}),
       });
       onSaved(`${dispositionWords[chosen]} saved on this device.`, startedAt);
@@ -176,7 +184,14 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
       ) : null}
 
       {step === 'answer' ? (
-        <AnswerStep question={project.headlineQuestion} answer={answer} onAnswer={setAnswer} saving={saving} onSave={() => void save('complete')} />
+        <AnswerStep
+          question={project.headlineQuestion}
+          answer={answer}
+          onAnswer={setAnswer}
+          saving={saving}
+          onSave={() => void save('complete')}
+          extra={<ReferenceField value={reference} onChange={setReference} problem={referenceMistake} />}
+        />
       ) : null}
     </div>
   );
