@@ -14,6 +14,7 @@ import { ProjectAccess } from '../projects/project-access.service.js';
 import { CellAllocator } from '../quotas/cell-allocator.js';
 import { CellsService } from '../quotas/cells.service.js';
 import { TargetsService } from '../quotas/targets.service.js';
+import { seedBackchecks } from './backchecks.js';
 import { drawRespondent, seeded, VELLMOOR_AGE_SEX, VELLMOOR_TARGETS } from './vellmoor.js';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
@@ -120,6 +121,7 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
     }
     await sync.sync(actor, project.id, batch);
   }
+  await seedBackchecks(db, project.id, today);
   return true;
 }
 
