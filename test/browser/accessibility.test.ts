@@ -95,12 +95,17 @@ describe('accessibility and width at 360×640', () => {
 
   it('holds on the supervisor’s pages and the close-cell dialog', async () => {
     const page = await asRole('supervisor@vellmoor.example', '/supervisor');
-    const problems = await checkPages(page, ['/supervisor/review', '/supervisor/interviewers', '/supervisor/backchecks', '/supervisor']);
+    const problems = await checkPages(page, ['/supervisor/review', '/supervisor/interviewers', '/supervisor']);
     await page.getByRole('button', { name: /^Close cell / }).first().click();
     const dialog = page.getByRole('dialog', { name: 'Close this cell?' });
     await dialog.waitFor();
     problems.push(...(await checkPage(page, 'close-cell dialog')));
     await dialog.getByRole('button', { name: 'Cancel' }).click();
+    problems.push(...(await checkPages(page, ['/supervisor/backchecks'])));
+    await page.getByRole('button', { name: 'Record the outcome' }).first().click();
+    await page.getByRole('radio', { name: /Not confirmed/ }).click();
+    problems.push(...(await checkPage(page, 'back-check outcome form')));
+    await screenshot(page, 'a11y-backcheck-outcome-form');
     expect(problems).toEqual([]);
   });
 

@@ -38,7 +38,7 @@ export function OutcomeForm({ busy, problem, onSave, onCancel }: OutcomeFormProp
       <p id={`${id}-what`} className="pl-backcheck-question">
         What did the call-back find?
       </p>
-      <RadioGroup labelledBy={`${id}-what`} options={options} value={outcome} onChoose={setOutcome} className="pl-backcheck-choices" optionClassName="pl-category" />
+      <RadioGroup labelledBy={`${id}-what`} options={options} value={outcome} onChoose={setOutcome} className="pl-backcheck-choices" optionClassName="pl-backcheck-option" />
       <div className="pl-field">
         <label htmlFor={`${id}-note`}>{outcome === 'not_confirmed' ? 'What differed (required)' : 'Note (optional)'}</label>
         <textarea id={`${id}-note`} value={note} maxLength={NOTE_MAX} onChange={(event) => setNote(event.target.value)} aria-describedby={mistake ? `${id}-problem` : undefined} />

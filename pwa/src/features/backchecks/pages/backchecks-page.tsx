@@ -46,7 +46,7 @@ function Lists({ projectId, data }: { projectId: string; data: BackcheckList }) 
       <p className="pl-backcheck-note">
         How they are chosen: {formatPercent(data.share, 0)} of each interviewer’s completes, and at least one per interviewer, decided
         once when each interview arrives, so the list never reshuffles. After a back-check that does not confirm, that interviewer’s
-        share rises by {formatPercent(data.raiseAfterNotConfirmed, 0)} for the rest of the field period.
+        share rises by {Math.round(data.raiseAfterNotConfirmed * 100)} percentage points for the rest of the field period.
       </p>
       <p className="pl-backcheck-note">
         The reference is a code from your agency’s contact sheet. It is still pseudonymous personal data (GDPR Recital 26): Plumbline
