@@ -4,6 +4,7 @@
 // selected for a back-check and deletes it some days after the call (data minimisation).
 import { useId } from 'react';
 import { FormProblem } from '../../../components/form-problem';
+import './reference-field.css';
 
 interface ReferenceFieldProps {
   value: string;
