@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { AccountsModule } from './accounts/accounts.module.js';
 import { AssignmentsModule } from './assignments/assignments.module.js';
 import { AuthModule } from './auth/auth.module.js';
+import { BackchecksModule } from './backchecks/backchecks.module.js';
 import { BalanceModule } from './balance/balance.module.js';
 import { AllExceptionsFilter } from './common/filters/http-exception.filter.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
@@ -58,6 +59,7 @@ export class AppModule {
         InterviewersModule,
         BalanceModule,
         QualityModule,
+        BackchecksModule,
         JobsModule,
         AccountsModule,
         OrganisationsModule,

@@ -101,6 +101,11 @@ describe('accessibility and width at 360×640', () => {
     await dialog.waitFor();
     problems.push(...(await checkPage(page, 'close-cell dialog')));
     await dialog.getByRole('button', { name: 'Cancel' }).click();
+    problems.push(...(await checkPages(page, ['/supervisor/backchecks'])));
+    await page.getByRole('button', { name: 'Record the outcome' }).first().click();
+    await page.getByRole('radio', { name: /Not confirmed/ }).click();
+    problems.push(...(await checkPage(page, 'back-check outcome form')));
+    await screenshot(page, 'a11y-backcheck-outcome-form');
     expect(problems).toEqual([]);
   });
 

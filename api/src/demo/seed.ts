@@ -18,6 +18,7 @@ import { CellsService } from '../quotas/cells.service.js';
 import { TargetsService } from '../quotas/targets.service.js';
 import { habitsOf } from './habits.js';
 import { addOutcomeDetails } from './outcome-details.js';
+import { seedBackchecks } from './backchecks.js';
 import { drawRespondent, seeded, VELLMOOR_AGE_SEX, VELLMOOR_TARGETS } from './vellmoor.js';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
@@ -129,6 +130,7 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
     await sync.sync(actor, project.id, batch);
   }
   await addOutcomeDetails(db, project.id);
+  await seedBackchecks(db, project.id, today);
   // The flags exist as soon as the demo starts (a server would queue this after each sync).
   await runQualityCheck(db, project.id);
   return true;

@@ -19,6 +19,8 @@ export interface CheckedItem {
   eligibilityKnown: boolean | null;
   startedAt: Date;
   endedAt: Date;
+  /** Contact-sheet code for a back-check (kept only if the interview is selected). */
+  respondentReference?: string;
 }
 
 export type ItemCheck = { ok: true; item: CheckedItem } | { ok: false; id: string | null; reason: string };
@@ -112,6 +114,7 @@ export function checkItem(raw: unknown): ItemCheck {
       eligibilityKnown: eligibility,
       startedAt: started.at,
       endedAt: ended.at,
+      ...(dto.respondentReference === undefined ? {} : { respondentReference: dto.respondentReference }),
     };
     return { ok: true, item };
   } catch {

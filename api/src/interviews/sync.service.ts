@@ -20,6 +20,7 @@ import { flagsOnArrival, type FlagCode } from './flags.js';
 import { insertAll, insertGuarded, type NewInterview } from './guarded-insert.js';
 import { checkCategories, checkItem, type CheckedItem } from './item-check.js';
 import { counted } from './counted.js';
+import { selectOnArrival } from '../backchecks/select-on-arrival.js';
 import { applyVoid, checkVoid, isVoidItem, type VoidCheck } from './void-items.js';
 
 export type SyncResult =
@@ -122,6 +123,7 @@ export class SyncService {
     const firstCopy = new Map<string, { index: number; fingerprint: string }>();
     const repeats = new Map<number, number>();
     const rows: NewInterview[] = [];
+    const references = new Map<string, string>();
 
     const out: SyncResult[] = checked.map((c, index): SyncResult => {
       if (!c.ok) return { id: c.id, status: 'rejected', reason: c.reason };
@@ -162,6 +164,7 @@ export class SyncService {
         over_quota_cells: fullCells,
         flags,
       });
+      if (item.respondentReference) references.set(item.id, item.respondentReference);
       return { id: item.id, status: 'accepted', overQuota, overQuotaCells: fullCells, flags };
     });
 
@@ -178,6 +181,9 @@ export class SyncService {
     });
     // A repeat inside the batch shares the fate of its first copy: never "duplicate" of something not stored.
     for (const [index, first] of repeats) if (out[first]!.status !== 'accepted') out[index] = out[first]!;
+    // Back-checks are decided once, for the completes this batch stored (references of others are dropped).
+    const completes = rows.filter((r) => r.disposition === 'complete' && stored.has(r.id));
+    await selectOnArrival(trx, project, completes.map((r) => ({ id: r.id, interviewerId: r.interviewer_id, respondentReference: references.get(r.id) })));
     // Voids after the new interviews, one by one (a device sends few); each is its item's result.
     let anyVoided = false;
     for (const [index, check] of read.voids) {

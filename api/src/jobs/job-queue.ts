@@ -86,6 +86,16 @@ export class JobQueue {
     return boss.send(queue.name, data, { singletonKey });
   }
 
+  /**
+   * Sends a job to the queue on a cron schedule (UTC). pg-boss keeps one schedule per queue
+   * name, so every instance may set it; the servers' upkeep sends the jobs.
+   */
+  async schedule<T extends object>(queue: QueueDefinition, cron: string, data: T): Promise<void> {
+    await this.define(queue);
+    const boss = await this.start();
+    await boss.schedule(queue.name, cron, data);
+  }
+
   /** Works on the queue's jobs one at a time; a handler that throws has its job retried. */
   async work<T extends object>(queue: QueueDefinition, handler: JobHandler<T>, pollingIntervalSeconds = 1): Promise<void> {
     await this.define(queue);

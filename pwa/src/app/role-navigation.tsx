@@ -1,5 +1,6 @@
 import { lazy, type ComponentType, type ReactElement } from 'react';
 import {
+  callOutline,
   checkmarkDoneOutline,
   cloudUploadOutline,
   documentTextOutline,
@@ -33,6 +34,7 @@ const CellsPage = page(interviewerPages, 'CellsPage');
 const QuotaBoardPage = page(supervisorPages, 'QuotaBoardPage');
 const ReviewQueuePage = page(supervisorPages, 'ReviewQueuePage');
 const InterviewersPage = page(supervisorPages, 'InterviewersPage');
+const BackchecksPage = page(supervisorPages, 'BackchecksPage');
 const ProjectsPage = page(leadPages, 'ProjectsPage');
 const NewProjectPage = page(leadPages, 'NewProjectPage');
 const ProjectQuotaBoardPage = page(leadPages, 'ProjectQuotaBoardPage');
@@ -64,6 +66,7 @@ export const roleNavigation: Record<Role, NavItem[]> = {
     { path: '/supervisor', label: 'Quota board', icon: statsChartOutline, element: <QuotaBoardPage /> },
     { path: '/supervisor/review', label: 'Review queue', icon: checkmarkDoneOutline, element: <ReviewQueuePage /> },
     { path: '/supervisor/interviewers', label: 'Interviewers', icon: peopleOutline, element: <InterviewersPage /> },
+    { path: '/supervisor/backchecks', label: 'Back-checks', icon: callOutline, element: <BackchecksPage /> },
   ],
   lead: [
     {

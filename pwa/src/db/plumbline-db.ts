@@ -50,6 +50,8 @@ export interface InterviewRecord {
   eligibilityKnown?: boolean;
   startedAt: string;
   endedAt: string;
+  /** A code from the agency's contact sheet (complete only); the server keeps it only for a back-check. */
+  respondentReference?: string;
 }
 
 /** A request to void a contact the server already has, sent through the outbox like a contact. */

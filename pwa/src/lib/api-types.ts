@@ -289,6 +289,54 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/backchecks": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["BackchecksController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/backchecks/{interviewId}/outcome": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["BackchecksController_record"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/backchecks/summary": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["BackchecksController_summary"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{projectId}/balance": {
         parameters: {
             query?: never;
@@ -714,6 +762,48 @@ export interface components {
              */
             userId: string;
         };
+        BackcheckCategoryResponse: {
+            category: string;
+            variable: string;
+        };
+        BackcheckListResponse: {
+            /** @description Pending first (oldest selection first), then done (latest first) */
+            backchecks: components["schemas"]["BackcheckResponse"][];
+            enabled: boolean;
+            /** @description References are deleted this many days after the back-check */
+            keepReferenceDays: number;
+            /** @description Added to an interviewer's share per not-confirmed back-check */
+            raiseAfterNotConfirmed: number;
+            /** @description Share of completes selected */
+            share: number;
+        };
+        BackcheckResponse: {
+            categories: components["schemas"]["BackcheckCategoryResponse"][];
+            /** @example 2026-11-20 */
+            fieldDay: string;
+            /** @enum {string|null} */
+            headlineAnswer: "yes" | "no" | "dont_know" | "no_answer" | null;
+            interviewerId: string;
+            interviewerName: string;
+            interviewId: string;
+            /**
+             * @description Null while pending
+             * @enum {string|null}
+             */
+            outcome: "confirmed" | "not_confirmed" | "not_reached" | null;
+            outcomeNote: string | null;
+            /** Format: date-time */
+            recordedAt: string | null;
+            recordedByName: string | null;
+            /** Format: date-time */
+            referenceDeletedAt: string | null;
+            /** @description Null when none was given or it was deleted (see referenceDeletedAt) */
+            respondentReference: string | null;
+            /** Format: date-time */
+            selectedAt: string;
+            /** @description The interviewer's back-check share when the interview arrived */
+            shareAtSelection: number;
+        };
         BackChecksDto: {
             enabled: boolean;
             /** @example 30 */
@@ -725,6 +815,17 @@ export interface components {
             raiseAfterNotConfirmed: number;
             /** @example 0.1 */
             share: number;
+        };
+        BackcheckSummaryResponse: {
+            confirmed: number;
+            /** @description The interviewer's share for completes arriving now */
+            currentShare: number;
+            interviewerId: string;
+            interviewerName: string;
+            notConfirmed: number;
+            notReached: number;
+            pending: number;
+            selected: number;
         };
         BackcheckTallyResponse: {
             /** @description Confirmed */
@@ -1363,6 +1464,15 @@ export interface components {
              */
             name: string;
         };
+        RecordOutcomeDto: {
+            /** @description What differed; required when the outcome is not_confirmed */
+            note?: string;
+            /**
+             * @description confirmed, not confirmed (note says what differed), or could not reach the respondent
+             * @enum {string}
+             */
+            outcome: "confirmed" | "not_confirmed" | "not_reached";
+        };
         RefreshDto: {
             /** @description The refresh token from the last sign-in or refresh */
             refreshToken: string;
@@ -1702,7 +1812,11 @@ export interface components {
 export type AaporGroupsResponse = components['schemas']['AaporGroupsResponse'];
 export type AcceptedItemResponse = components['schemas']['AcceptedItemResponse'];
 export type AssignmentResponse = components['schemas']['AssignmentResponse'];
+export type BackcheckCategoryResponse = components['schemas']['BackcheckCategoryResponse'];
+export type BackcheckListResponse = components['schemas']['BackcheckListResponse'];
+export type BackcheckResponse = components['schemas']['BackcheckResponse'];
 export type BackChecksDto = components['schemas']['BackChecksDto'];
+export type BackcheckSummaryResponse = components['schemas']['BackcheckSummaryResponse'];
 export type BackcheckTallyResponse = components['schemas']['BackcheckTallyResponse'];
 export type BalanceMarginResponse = components['schemas']['BalanceMarginResponse'];
 export type BalanceOutcomeResponse = components['schemas']['BalanceOutcomeResponse'];
@@ -1758,6 +1872,7 @@ export type QualitySettingsResponse = components['schemas']['QualitySettingsResp
 export type QuotaBoardResponse = components['schemas']['QuotaBoardResponse'];
 export type QuotaCategoryResponse = components['schemas']['QuotaCategoryResponse'];
 export type QuotaVariableResponse = components['schemas']['QuotaVariableResponse'];
+export type RecordOutcomeDto = components['schemas']['RecordOutcomeDto'];
 export type RefreshDto = components['schemas']['RefreshDto'];
 export type RejectedItemResponse = components['schemas']['RejectedItemResponse'];
 export type RequestResetDto = components['schemas']['RequestResetDto'];
@@ -2304,6 +2419,74 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+        };
+    };
+    BackchecksController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BackcheckListResponse"];
+                };
+            };
+        };
+    };
+    BackchecksController_record: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                interviewId: string;
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["RecordOutcomeDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BackcheckResponse"];
+                };
+            };
+        };
+    };
+    BackchecksController_summary: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BackcheckSummaryResponse"][];
+                };
             };
         };
     };

@@ -12,7 +12,10 @@ export async function logContact(interviewerId: string, projectId: string, draft
   const record: InterviewRecord = { id: uuidv4(), ...draft, endedAt: new Date().toISOString() };
   // A complete carries every category and the answer; a partial or refusal may carry the
   // categories the interviewer could see (for comparing nonresponse by cell); others neither.
-  if (record.disposition !== 'complete') delete record.headlineAnswer;
+  if (record.disposition !== 'complete') {
+    delete record.headlineAnswer;
+    delete record.respondentReference;
+  }
   // Turned away because the cell was full keeps the categories that showed it.
   if (!['complete', 'partial', 'refusal', 'quota_full'].includes(record.disposition) || Object.keys(record.categories ?? {}).length === 0) {
     delete record.categories;

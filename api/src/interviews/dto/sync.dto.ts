@@ -1,5 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsString, IsObject, IsOptional } from 'class-validator';
+import { RespondentReference } from '../../backchecks/dto/respondent-reference.js';
 import { DISPOSITIONS, HEADLINE_ANSWERS, type Disposition, type HeadlineAnswer } from '../../database/tables.js';
 
 export const SYNC_BATCH_LIMIT = 1000;
@@ -51,4 +52,14 @@ export class InterviewItemDto {
   @ApiProperty({ example: '2026-11-20T10:19:00Z', description: 'RFC 3339 date and time with Z or an offset' })
   @IsString({ message: 'endedAt must be a date and time such as 2026-11-20T10:02:00Z' })
   endedAt: string;
+
+  @ApiPropertyOptional({
+    maxLength: 20,
+    example: 'VM-0412',
+    description:
+      "A code from the agency's own contact sheet (1–20 letters, digits, '-', '_', '/'), never a name, address, e-mail or phone number. Kept only if the interview is selected for a back-check, else dropped",
+  })
+  @IsOptional()
+  @RespondentReference()
+  respondentReference?: string;
 }

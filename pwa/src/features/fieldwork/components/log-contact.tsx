@@ -10,6 +10,7 @@ import { dispositionWords, headlineAnswerOf } from '../../../lib/fieldwork-words
 import { respondentCells } from '../../../sync/cell-status';
 import { logContact } from '../../../sync/log-contact';
 import type { ProjectCellStatus } from '../hooks/use-field-status';
+import { referenceProblem } from '@plumbline/cell-rules/respondent-reference';
 import { AnswerStep } from './answer-step';
 import { AssignedCellsNote } from './assigned-cells-note';
 import { CategoriesStep } from './categories-step';
@@ -17,6 +18,7 @@ import { CellCheckStep } from './cell-check-step';
 import { EligibilityQuestion } from './eligibility-question';
 import { ObservedCategories } from './observed-categories';
 import { OutcomeStep } from './outcome-step';
+import { ReferenceField } from './reference-field';
 import { FormProblem } from '../../../components/form-problem';
 import { stepAnnouncement } from './log-steps';
 
@@ -43,6 +45,8 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
   const [categories, setCategories] = useState<Record<string, string>>(draft?.categories ?? {});
   const [answer, setAnswer] = useState<HeadlineAnswer | undefined>(headlineAnswerOf(draft?.headlineAnswer));
   const [eligibilityKnown, setEligibilityKnown] = useState<boolean | undefined>(draft?.eligibilityKnown);
+  const [reference, setReference] = useState('');
+  const [referenceMistake, setReferenceMistake] = useState<string>();
   const [saving, setSaving] = useState(false);
   const [problem, setProblem] = useState<string>();
   const variables = status?.variables ?? [];
@@ -84,13 +88,17 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
   );
 
   async function save(chosen: Disposition) {
+    const code = reference.trim();
+    const mistake = chosen === 'complete' && code ? (referenceProblem(code) ?? undefined) : undefined;
+    setReferenceMistake(mistake);
+    if (mistake) return;
     setSaving(true);
     setProblem(undefined);
     try {
       await logContact(userId, project.id, {
         disposition: chosen,
         startedAt,
-        ...(chosen === 'complete' ? { categories, headlineAnswer: answer } : {}),
+        ...(chosen === 'complete' ? { categories, headlineAnswer: answer, ...(code ? { respondentReference: code } : {}) } : {}),
         ...((OBSERVABLE.has(chosen) || chosen === 'quota_full') && Object.keys(categories).length > 0 ? { categories } : {}),
         ...(ELIGIBILITY_ASKED.has(chosen) && eligibilityKnown !== undefined ? { eligibilityKnown } : {}),
       });
@@ -184,7 +192,14 @@ export function LogContact({ userId, project, status, draft, onSaved, onCancel }
       ) : null}
 
       {step === 'answer' ? (
-        <AnswerStep question={project.headlineQuestion} answer={answer} onAnswer={setAnswer} saving={saving} onSave={() => void save('complete')} />
+        <AnswerStep
+          question={project.headlineQuestion}
+          answer={answer}
+          onAnswer={setAnswer}
+          saving={saving}
+          onSave={() => void save('complete')}
+          extra={<ReferenceField value={reference} onChange={setReference} problem={referenceMistake} />}
+        />
       ) : null}
     </div>
   );
