@@ -23,6 +23,7 @@ import { JobsModule } from './jobs/jobs.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
 import { QuotasModule } from './quotas/quotas.module.js';
+import { ReviewModule } from './review/review.module.js';
 import { UsersModule } from './users/users.module.js';
 
 @Module({})
@@ -54,6 +55,7 @@ export class AppModule {
         AssignmentsModule,
         InterviewsModule,
         BalanceModule,
+        ReviewModule,
         JobsModule,
         AccountsModule,
         OrganisationsModule,
