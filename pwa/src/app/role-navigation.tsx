@@ -36,6 +36,7 @@ const InterviewersPage = page(supervisorPages, 'InterviewersPage');
 const ProjectsPage = page(leadPages, 'ProjectsPage');
 const NewProjectPage = page(leadPages, 'NewProjectPage');
 const ProjectQuotaBoardPage = page(leadPages, 'ProjectQuotaBoardPage');
+const ProjectReviewQueuePage = page(leadPages, 'ProjectReviewQueuePage');
 const BenchmarksPage = page(leadPages, 'BenchmarksPage');
 const DeliveryPage = page(leadPages, 'DeliveryPage');
 const PeoplePage = page(adminPages, 'PeoplePage');
@@ -74,6 +75,7 @@ export const roleNavigation: Record<Role, NavItem[]> = {
         { path: '/lead/projects/new', element: <NewProjectPage /> },
         { path: '/lead/projects/:projectId', element: <ProjectPage /> },
         { path: '/lead/projects/:projectId/quota-board', element: <ProjectQuotaBoardPage /> },
+        { path: '/lead/projects/:projectId/review', element: <ProjectReviewQueuePage /> },
       ],
     },
     { path: '/lead/balance', label: 'Balance', icon: scaleOutline, element: <BalancePage /> },

@@ -37,6 +37,9 @@ export function ProjectPage() {
               <Link to={`/lead/projects/${p.id}/quota-board`} className="pl-back-link">
                 Quota board →
               </Link>
+              <Link to={`/lead/projects/${p.id}/review`} className="pl-back-link">
+                Review queue →
+              </Link>
               <Link to="/lead/balance" className="pl-back-link" onClick={() => rememberProject(p.id)}>
                 Balance →
               </Link>
