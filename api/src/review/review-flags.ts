@@ -32,12 +32,13 @@ export async function flagsOfRows(db: Knex, projectId: string, rows: QueueRow[])
   const ids = open.map((r) => r.id);
   const interviewers = [...new Set(open.map((r) => r.interviewer_id))];
   const cellIds = [...new Set(open.flatMap((r) => (r.over_quota ? r.over_quota_cells : [])))];
+  const none = Promise.resolve([]);
   const [findings, tests, backchecks, cells] = await Promise.all([
-    db('interview_findings').whereIn('interview_id', ids).orderBy('rule').select('interview_id', 'rule', 'reason', 'figures'),
-    db('interviewer_tests').where({ project_id: projectId, flagged: true }).whereIn('interviewer_id', interviewers)
-      .select('interviewer_id', 'reason', 'figures', 'p_value', 'adjusted_p_value'),
-    db('backchecks').whereIn('interview_id', ids).where('outcome', 'not_confirmed').select('interview_id', 'outcome_note'),
-    db('quota_cells').whereIn('id', cellIds).select('id', 'label'),
+    ids.length ? db('interview_findings').whereIn('interview_id', ids).orderBy('rule').select('interview_id', 'rule', 'reason', 'figures') : none,
+    ids.length ? db('interviewer_tests').where({ project_id: projectId, flagged: true }).whereIn('interviewer_id', interviewers)
+      .select('interviewer_id', 'reason', 'figures', 'p_value', 'adjusted_p_value') : none,
+    ids.length ? db('backchecks').whereIn('interview_id', ids).where('outcome', 'not_confirmed').select('interview_id', 'outcome_note') : none,
+    cellIds.length ? db('quota_cells').whereIn('id', cellIds).select('id', 'label') : none,
   ]);
   const cellLabel = new Map(cells.map((c) => [c.id, c.label]));
   const testOf = new Map(tests.map((t) => [t.interviewer_id, t]));

@@ -4,7 +4,7 @@
 // interviews_review_order (migration 20261202006200), however many interviews the project has.
 import type { Knex } from 'knex';
 import type { ReviewStatus } from '../database/tables.js';
-import { flaggedIds } from './flagged-ids.js';
+import { hasFlag } from './flag-predicates.js';
 
 export interface QueueFilters {
   flag?: string;
@@ -65,23 +65,13 @@ function page(q: Knex.QueryBuilder, group: 0 | 1, after: QueueCursor | undefined
 export async function queuePage(db: Knex, projectId: string, f: QueueFilters, after: QueueCursor | undefined, limit: number) {
   const rows: QueueRow[] = [];
   if (f.status !== 'approved' && (!after || after.group === 0)) {
-    const flagged = filtered(db, projectId, f).whereNot('i.review_status', 'approved').whereIn('i.id', flaggedIds(db, projectId, f.flag));
+    const flagged = filtered(db, projectId, f).whereNot('i.review_status', 'approved').where(hasFlag(db, projectId, f.flag));
     rows.push(...(await page(flagged, 0, after, limit + 1)));
   }
   // Filtering by a flag lists only the interviews that carry it.
   if (!f.flag && rows.length <= limit) {
-    const rest = filtered(db, projectId, f).where((w) => w.where('i.review_status', 'approved').orWhereNotIn('i.id', flaggedIds(db, projectId)));
+    const rest = filtered(db, projectId, f).where((w) => w.where('i.review_status', 'approved').orWhereNot(hasFlag(db, projectId)));
     rows.push(...(await page(rest, 1, after, limit + 1 - rows.length)));
   }
   return { rows: rows.slice(0, limit), more: rows.length > limit };
-}
-
-/** How many interviews that match the filters carry a flag (approved ones do not). */
-export async function flaggedCount(db: Knex, projectId: string, f: QueueFilters): Promise<number> {
-  if (f.status === 'approved') return 0;
-  const row = await filtered(db, projectId, f)
-    .whereNot('i.review_status', 'approved')
-    .whereIn('i.id', flaggedIds(db, projectId, f.flag))
-    .first(db.raw('count(*)::int AS n'));
-  return (row as unknown as { n: number }).n;
 }

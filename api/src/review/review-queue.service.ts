@@ -7,7 +7,7 @@ import type { ReviewStatus } from '../database/tables.js';
 import { loadCategoryMap } from '../quotas/category-map.js';
 import { FLAG_LABELS } from './flag-labels.js';
 import { flagsOfRows, type ReviewFlag } from './review-flags.js';
-import { flaggedCount, queuePage, type QueueCursor, type QueueFilters } from './review-queue.repository.js';
+import { queuePage, type QueueCursor, type QueueFilters } from './review-queue.repository.js';
 import type { ReviewQueueQuery } from './dto/review-query.dto.js';
 
 export interface ReviewItem {
@@ -27,8 +27,6 @@ export interface ReviewItem {
 export interface ReviewQueuePage {
   items: ReviewItem[];
   nextCursor: string | null;
-  /** Flagged interviews matching the filters; given with the first page only (null after). */
-  flagged: number | null;
 }
 
 export interface ReviewOptions {
@@ -67,11 +65,7 @@ export class ReviewQueueService {
     }
     const after = query.after ? decodeCursor(query.after) : undefined;
     const limit = query.limit ?? 50;
-    const [{ rows, more }, flagged, meaning] = await Promise.all([
-      queuePage(this.db, projectId, filters, after, limit),
-      after ? Promise.resolve(null) : flaggedCount(this.db, projectId, filters),
-      loadCategoryMap(this.db, projectId),
-    ]);
+    const [{ rows, more }, meaning] = await Promise.all([queuePage(this.db, projectId, filters, after, limit), loadCategoryMap(this.db, projectId)]);
     const flags = await flagsOfRows(this.db, projectId, rows);
     const last = rows.at(-1);
     return {
@@ -92,7 +86,6 @@ export class ReviewQueueService {
         flags: flags.get(r.id) ?? [],
       })),
       nextCursor: more && last ? encodeCursor({ group: last.group, startedAt: last.started_key, id: last.id }) : null,
-      flagged,
     };
   }
 

@@ -1348,8 +1348,6 @@ export interface components {
             name: string;
         };
         ReviewQueueResponse: {
-            /** @description Flagged interviews matching the filters; on the first page only */
-            flagged: number | null;
             /** @description Flagged interviews first, each group newest first */
             items: components["schemas"]["ReviewItemResponse"][];
             /** @description Pass as `after` for the next page; null on the last page */

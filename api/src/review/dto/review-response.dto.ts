@@ -81,9 +81,6 @@ export class ReviewQueueResponse implements ReviewQueuePage {
 
   @ApiProperty({ type: String, nullable: true, description: 'Pass as `after` for the next page; null on the last page' })
   nextCursor: string | null;
-
-  @ApiProperty({ type: Number, nullable: true, description: 'Flagged interviews matching the filters; on the first page only' })
-  flagged: number | null;
 }
 
 export class FlagOptionResponse {

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { QueryView } from '../../../components/query-view';
 import { EmptyPanel } from '../../../components/state-panels';
 import { FormProblem } from '../../../components/form-problem';
-import { formatCalendarDate, formatCount } from '../../../lib/format';
+import { formatCalendarDate } from '../../../lib/format';
 import { useDecide, type Decision } from '../api/decide';
 import { downloadDecisions } from '../api/download-decisions';
 import { useReviewOptions } from '../api/get-review-options';
@@ -25,7 +25,6 @@ export function ReviewQueue({ projectId, projectName }: { projectId: string; pro
   const options = useReviewOptions(projectId);
   const decideMutation = useDecide(projectId);
   const items = queue.data?.pages.flatMap((p) => p.items) ?? [];
-  const flagged = queue.data?.pages[0]?.flagged ?? 0;
 
   const choose = (next: ReviewFilters) => {
     setFilters(next);
@@ -65,7 +64,7 @@ export function ReviewQueue({ projectId, projectName }: { projectId: string; pro
         {() => (
           <>
             <p className="pl-small pl-muted">
-              {formatCount(flagged)} flagged {flagged === 1 ? 'interview' : 'interviews'} match; flagged ones come first, newest first.
+              Flagged interviews come first, then the rest; each newest first.
             </p>
             <div className="pl-review-actions" aria-label="Decide on the selected interviews" role="group">
               <span className="pl-small">{selected.size} selected</span>
