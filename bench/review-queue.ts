@@ -2,7 +2,8 @@
  * Review queue benchmark (not a test), on loopback only: a project of 100,000 contacts by 40
  * interviewers over 30 field days, inserted directly, about one in twelve flagged (arrival flags,
  * findings of the rules, one interviewer's answer test, back-checks not confirmed); then 20
- * clients fetch the queue's first page back to back, unfiltered and filtered by one flag.
+ * clients fetch the queue's first page back to back, unfiltered, filtered by one flag and by one
+ * interviewer's day; and, for scale, the lightest signed-in read the same way.
  *
  *   npm run bench:review-queue    (after `npm start` or `npm test` has built the API once)
  *
@@ -105,10 +106,13 @@ async function main(): Promise<void> {
     const byFlag = await load({ url: `${BASE}${path}?flag=too_short`, token, connections: 20, seconds: SECONDS });
     log('GET /review?interviewerId=…&fieldDay=…, 20 clients');
     const oneDay = await load({ url: `${BASE}${path}?interviewerId=${team[1]!.id}&fieldDay=${days[3]}`, token, connections: 20, seconds: SECONDS });
+    // For scale on a busy machine: the lightest signed-in read (one project's summary) the same way.
+    log('GET /projects/:id, 20 clients (for scale)');
+    const lightest = await load({ url: `${BASE}/api/projects/${project!.id}`, token, connections: 20, seconds: SECONDS });
     console.log(JSON.stringify({
       machine: { cpus: cpus().length, loadAverageAtStart: loadAtStart, loadAverageAtEnd: loadavg().map((x) => Number(x.toFixed(2))) },
       contacts: CONTACTS, flagged: Number((await db.raw(`SELECT count(*) FROM interviews i WHERE cardinality(flags) > 0 OR id IN (SELECT interview_id FROM interview_findings UNION SELECT interview_id FROM backchecks) OR interviewer_id = ?`, [team[0]!.id])).rows[0].count), pageSize: first.items.length,
-      firstPage, byFlag, oneInterviewerDay: oneDay,
+      firstPage, byFlag, oneInterviewerDay: oneDay, lightestRead: lightest,
     }, null, 2));
   } finally {
     await new Promise((r) => setTimeout(r, 1000));

@@ -201,6 +201,32 @@ describe('the audit trail', () => {
   });
 });
 
+describe('every kind of flag', () => {
+  it('shows over quota with its cell, the interviewer\'s answer test with its p-values and a back-check with what differed', async () => {
+    const cells = (await lead.get(`${base}/cells`)).body.cells as { id: string; label: string }[];
+    const northId = cells.find((c) => c.label === 'region: North')!.id;
+    await supervisor.post(`${base}/cells/${northId}/close`);
+    const [late, checked] = [complete(young(), 'yes' as never, at('2026-11-23', 9)), complete(young(), 'no' as never, at('2026-11-23', 8))];
+    expect((await interviewer.post(syncPath, { interviews: [late, checked] })).body.accepted).toBe(2);
+    await supervisor.post(`${base}/cells/${northId}/reopen`);
+    await h.db('interviewer_tests').insert({ project_id: org.projectId, interviewer_id: org.users.interviewer.id, completes: 40, p_value: 0.0012, adjusted_p_value: 0.03, flagged: true, reason: 'Answers yes more often than the others in the same cells', figures: { completes: 40 } });
+    await h.db('backchecks').insert({ interview_id: checked.id, project_id: org.projectId, interviewer_id: org.users.interviewer.id, share_at_selection: 0.1, outcome: 'not_confirmed', outcome_note: 'Respondent says nobody called', recorded_by: org.users.supervisor.id, recorded_at: new Date() });
+
+    const byFlag = async (flag: string) => (await queue(`?flag=${flag}&fieldDay=2026-11-23`)).items;
+    const [overQuota] = await byFlag('over_quota');
+    expect(overQuota!.flags.find((f) => f.code === 'over_quota')).toEqual({ code: 'over_quota', label: 'Over quota', reason: 'Arrived when region: North was full or closed', figures: [{ name: 'cells', value: 1 }] });
+    expect((await byFlag('interviewer_answers')).map((i) => i.id)).toEqual([late.id, checked.id]);
+    expect(overQuota!.flags.find((f) => f.code === 'interviewer_answers')).toEqual({
+      code: 'interviewer_answers', label: 'Interviewer\'s answers differ', reason: 'Answers yes more often than the others in the same cells',
+      figures: [{ name: 'pValue', value: 0.0012 }, { name: 'adjustedPValue', value: 0.03 }, { name: 'completes', value: 40 }],
+    });
+    const [backchecked] = await byFlag('backcheck_not_confirmed');
+    expect(backchecked!.id).toBe(checked.id);
+    expect(backchecked!.flags.map((f) => [f.code, f.reason])).toContainEqual(['backcheck_not_confirmed', 'Back-check did not confirm it: Respondent says nobody called']);
+    await h.db('interviewer_tests').where({ project_id: org.projectId }).delete();
+  });
+});
+
 describe('decisions and sync together', () => {
   it('a sync batch and a bulk reject of the same project at once both succeed', async () => {
     const cell = await north();

@@ -5,6 +5,7 @@
 import type { Knex } from 'knex';
 import type { ReviewStatus } from '../database/tables.js';
 import { hasFlag } from './flag-predicates.js';
+import { detailColumns, type RowDetails } from './queue-row-details.js';
 
 export interface QueueFilters {
   flag?: string;
@@ -22,7 +23,7 @@ export interface QueueCursor {
   id: string;
 }
 
-export interface QueueRow {
+export interface QueueRow extends RowDetails {
   id: string;
   interviewer_id: string;
   interviewer_name: string;
@@ -31,12 +32,10 @@ export interface QueueRow {
   ended_at: Date;
   started_key: string;
   disposition: string;
-  category_ids: string[];
   headline_answer: string | null;
   review_status: ReviewStatus;
   flags: string[];
   over_quota: boolean;
-  over_quota_cells: string[];
   group: 0 | 1;
 }
 
@@ -49,15 +48,15 @@ function filtered(db: Knex, projectId: string, f: QueueFilters) {
   return q;
 }
 
-function page(q: Knex.QueryBuilder, group: 0 | 1, after: QueueCursor | undefined, limit: number) {
+function page(db: Knex, q: Knex.QueryBuilder, group: 0 | 1, after: QueueCursor | undefined, limit: number) {
   if (after && after.group === group) q.whereRaw('(i.started_at, i.id) < (?::timestamptz, ?::uuid)', [after.startedAt, after.id]);
   return q
     .orderBy([{ column: 'i.started_at', order: 'desc' }, { column: 'i.id', order: 'desc' }])
     .limit(limit)
     .select(
       'i.id', 'i.interviewer_id', 'u.name as interviewer_name', 'i.field_day', 'i.started_at', 'i.ended_at', 'i.disposition',
-      'i.category_ids', 'i.headline_answer', 'i.review_status', 'i.flags', 'i.over_quota', 'i.over_quota_cells',
-      q.client.raw('i.started_at::text AS started_key'), q.client.raw('?::int AS "group"', [group]),
+      'i.headline_answer', 'i.review_status', 'i.flags', 'i.over_quota',
+      db.raw('i.started_at::text AS started_key'), db.raw('?::int AS "group"', [group]), ...detailColumns(db),
     ) as Promise<QueueRow[]>;
 }
 
@@ -66,12 +65,12 @@ export async function queuePage(db: Knex, projectId: string, f: QueueFilters, af
   const rows: QueueRow[] = [];
   if (f.status !== 'approved' && (!after || after.group === 0)) {
     const flagged = filtered(db, projectId, f).whereNot('i.review_status', 'approved').where(hasFlag(db, projectId, f.flag));
-    rows.push(...(await page(flagged, 0, after, limit + 1)));
+    rows.push(...(await page(db, flagged, 0, after, limit + 1)));
   }
   // Filtering by a flag lists only the interviews that carry it.
   if (!f.flag && rows.length <= limit) {
     const rest = filtered(db, projectId, f).where((w) => w.where('i.review_status', 'approved').orWhereNot(hasFlag(db, projectId)));
-    rows.push(...(await page(rest, 1, after, limit + 1 - rows.length)));
+    rows.push(...(await page(db, rest, 1, after, limit + 1 - rows.length)));
   }
   return { rows: rows.slice(0, limit), more: rows.length > limit };
 }

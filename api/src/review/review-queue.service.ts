@@ -4,9 +4,8 @@ import { BadRequestException, Inject, Injectable } from '@nestjs/common';
 import type { Knex } from 'knex';
 import { KNEX } from '../database/database.constants.js';
 import type { ReviewStatus } from '../database/tables.js';
-import { loadCategoryMap } from '../quotas/category-map.js';
 import { FLAG_LABELS } from './flag-labels.js';
-import { flagsOfRows, type ReviewFlag } from './review-flags.js';
+import { flagsOfRow, type ReviewFlag } from './review-flags.js';
 import { queuePage, type QueueCursor, type QueueFilters } from './review-queue.repository.js';
 import type { ReviewQueueQuery } from './dto/review-query.dto.js';
 
@@ -65,8 +64,7 @@ export class ReviewQueueService {
     }
     const after = query.after ? decodeCursor(query.after) : undefined;
     const limit = query.limit ?? 50;
-    const [{ rows, more }, meaning] = await Promise.all([queuePage(this.db, projectId, filters, after, limit), loadCategoryMap(this.db, projectId)]);
-    const flags = await flagsOfRows(this.db, projectId, rows);
+    const { rows, more } = await queuePage(this.db, projectId, filters, after, limit);
     const last = rows.at(-1);
     return {
       items: rows.map((r) => ({
@@ -77,13 +75,10 @@ export class ReviewQueueService {
         endedAt: r.ended_at.toISOString(),
         durationSeconds: Math.round((r.ended_at.getTime() - r.started_at.getTime()) / 1000),
         disposition: r.disposition,
-        categories: r.category_ids.flatMap((id) => {
-          const m = meaning.get(id);
-          return m ? [{ variable: m.variable, label: m.label }] : [];
-        }),
+        categories: r.categories,
         headlineAnswer: r.headline_answer,
         reviewStatus: r.review_status,
-        flags: flags.get(r.id) ?? [],
+        flags: flagsOfRow(r),
       })),
       nextCursor: more && last ? encodeCursor({ group: last.group, startedAt: last.started_key, id: last.id }) : null,
     };
