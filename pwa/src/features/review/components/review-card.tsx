@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { formatCalendarDate, formatClock } from '../../../lib/format';
 import { dispositionWord, headlineAnswerOf, headlineAnswerWords } from '../../../lib/fieldwork-words';
 import type { Decision } from '../api/decide';
@@ -19,6 +20,8 @@ interface ReviewCardProps {
 export function ReviewCard({ projectId, item, selected, onSelect, onDecideDay }: ReviewCardProps) {
   const when = `${formatCalendarDate(item.fieldDay)}, ${formatClock(item.startedAt)}`;
   const answer = headlineAnswerOf(item.headlineAnswer);
+  // The trail is fetched when the details are first opened, not for every card of the page.
+  const [opened, setOpened] = useState(false);
   return (
     <li className={`pl-card pl-review-card${item.flags.length ? ' is-flagged' : ''}`}>
       <div className="pl-card-head">
@@ -42,7 +45,7 @@ export function ReviewCard({ projectId, item, selected, onSelect, onDecideDay }:
           ))}
         </ul>
       ) : null}
-      <details className="pl-review-details">
+      <details className="pl-review-details" onToggle={(event) => event.currentTarget.open && setOpened(true)}>
         <summary>Details, reasons and decisions</summary>
         {item.flags.map((f) => (
           <div key={f.code} className="pl-review-reason-block">
@@ -61,7 +64,7 @@ export function ReviewCard({ projectId, item, selected, onSelect, onDecideDay }:
         ))}
         <p className="pl-card-text pl-small">Cells: {item.categories.map((c) => `${c.variable}: ${c.label}`).join(', ') || 'none'}</p>
         <h3 className="pl-review-subtitle">Decisions</h3>
-        <InterviewTrail projectId={projectId} interviewId={item.id} />
+        {opened ? <InterviewTrail projectId={projectId} interviewId={item.id} /> : null}
         <h3 className="pl-review-subtitle">All of {item.interviewer.name} on {formatCalendarDate(item.fieldDay)}</h3>
         <div className="pl-review-day-actions">
           {(['approve', 'reject', 'reinstate'] as const).map((action) => (

@@ -45,6 +45,8 @@ describe('the supervisor’s review queue', () => {
     const cards = [...list.querySelectorAll<HTMLElement>(':scope > li')];
     expect(cards).toHaveLength(2);
     expect(within(cards[0]!).getByRole('list', { name: 'Flags' })).toHaveTextContent('Too short');
+    // Each interview's decisions are fetched when it is opened, not with the list.
+    expect(api.calls.filter((c) => c.path.endsWith('/decisions'))).toEqual([]);
     await user.click(within(cards[0]!).getByText('Details, reasons and decisions'));
     expect(cards[0]).toHaveTextContent('Took 4 min; under a third of the median complete (15 min)');
     expect(cards[0]).toHaveTextContent('median minutes15');
