@@ -63,7 +63,7 @@ export class ReviewDecisionsService {
         targets = rows.filter((r) => from.includes(r.review_status));
         if (!targets.length) {
           throw new ConflictException(rows.length
-            ? `None of this interviewer's ${rows.length} interviews on ${dto.selection!.fieldDay} can be ${dto.action === 'reinstate' ? 'reinstated' : `${dto.action}d`} (they are already ${to === 'pending' ? 'not rejected' : to})`
+            ? `None of this interviewer's ${rows.length} interviews on ${dto.selection!.fieldDay} can be ${dto.action === 'reinstate' ? 'reinstated (none of them is rejected)' : `${dto.action}d (they are already ${to})`}`
             : `This interviewer has no interviews on ${dto.selection!.fieldDay} in this project`);
         }
       }
