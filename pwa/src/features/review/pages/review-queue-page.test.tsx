@@ -1,7 +1,7 @@
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { installFakeApi, json } from '../../../test/fake-api';
+import { installFakeApi, json, problem } from '../../../test/fake-api';
 import { renderApp, signedInAs } from '../../../test/render-app';
 
 const project = {
@@ -71,5 +71,32 @@ describe('the supervisor’s review queue', () => {
     expect(screen.getByText('Rejected 1 interview.', { selector: '[role="status"]' })).toBeInTheDocument();
     // The queue is fetched again after the decision.
     expect(await screen.findByText('Rejected', { selector: '.pl-review-status' })).toBeInTheDocument();
+  });
+
+  it('says why a decision was refused, and exports the decisions as a file', async () => {
+    const api = installFakeApi();
+    api.on('GET', '/api/projects', () => json([project]));
+    api.on('GET', '/api/projects/p1/review/options', () => json(options));
+    api.on('GET', '/api/projects/p1/review', () => json({ items: [short], nextCursor: null }));
+    api.on('POST', '/api/projects/p1/review/decisions', () => problem(409, 'Conflict', 'Cannot reinstate this interview: it is pending (reinstate applies to rejected interviews): i1'));
+    api.on('GET', '/api/projects/p1/review/decisions.csv', () => new Response('decided_at,interview_id\n', { headers: { 'Content-Type': 'text/csv' } }));
+    const saved: Blob[] = [];
+    // jsdom has no object URLs: keep what would be saved.
+    Object.assign(URL, { createObjectURL: (blob: Blob) => (saved.push(blob), 'blob:decisions'), revokeObjectURL: () => undefined });
+    await signedInAs('supervisor');
+    renderApp('/supervisor/review');
+    const user = userEvent.setup();
+
+    await user.click(await screen.findByRole('checkbox'));
+    await user.click(within(screen.getByRole('group', { name: 'Decide on the selected interviews' })).getByRole('button', { name: 'Reinstate' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Reinstate 1 interview?' });
+    await user.type(within(dialog).getByLabelText('Reason (required)'), 'Checked again');
+    await user.click(within(dialog).getByRole('button', { name: 'Reinstate' }));
+    expect(await within(dialog).findByRole('alert')).toHaveTextContent('Cannot reinstate this interview: it is pending');
+
+    await user.click(within(dialog).getByRole('button', { name: 'Cancel' }));
+    await user.click(screen.getByRole('button', { name: 'Export decisions (CSV)' }));
+    await vi.waitFor(() => expect(saved).toHaveLength(1));
+    expect(await saved[0]!.text()).toBe('decided_at,interview_id\n');
   });
 });
