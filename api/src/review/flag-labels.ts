@@ -3,6 +3,7 @@
 // checks (interview_findings rules, the interviewer's answer test, back-checks) and over quota.
 // Each flag on an interview also carries its own reason and figures (review-flags.ts).
 import { FLAG_CODES, FLAG_REASONS, type FlagCode } from '../interviews/flags.js';
+import type { TimingRule } from '../quality/interview-rules.js';
 
 export interface FlagLabel {
   label: string;
@@ -19,9 +20,9 @@ const ARRIVAL_LABELS: Record<FlagCode, string> = {
 };
 
 /** Rules the server runs over a project's interviews (interview_findings.rule). */
-export const FINDING_RULES = ['too_short', 'overlapping', 'out_of_hours', 'burst'] as const;
+export const FINDING_RULES = ['too_short', 'overlapping', 'out_of_hours', 'burst'] as const satisfies readonly TimingRule[];
 
-const QUALITY_LABELS: Record<string, FlagLabel> = {
+const QUALITY_LABELS: Record<TimingRule | 'over_quota' | 'interviewer_answers' | 'backcheck_not_confirmed', FlagLabel> = {
   over_quota: { label: 'Over quota', explanation: 'Arrived when a cell it belongs to was already full or closed' },
   too_short: { label: 'Too short', explanation: 'Shorter than the project\'s limit for a complete' },
   overlapping: { label: 'Overlapping', explanation: 'Its start-to-end span overlaps another interview by the same interviewer' },
