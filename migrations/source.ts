@@ -19,6 +19,7 @@ import * as m0400 from './20261202004000_headline_answers.js';
 import * as m0410 from './20261202004100_interview_voids.js';
 import * as m0051 from './20261202005100_assignments_and_archive.js';
 import * as m0060 from './20261202006000_quality_control.js';
+import * as m0062 from './20261202006200_review_queue_indexes.js';
 import * as m0063 from './20261202006300_backchecks_follow_interviews.js';
 import * as m0064 from './20261202006400_quota_full_and_eligibility.js';
 
@@ -40,6 +41,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202004100_interview_voids': m0410,
   '20261202005100_assignments_and_archive': m0051,
   '20261202006000_quality_control': m0060,
+  '20261202006200_review_queue_indexes': m0062,
   '20261202006300_backchecks_follow_interviews': m0063,
   '20261202006400_quota_full_and_eligibility': m0064,
 };

@@ -26,6 +26,7 @@ import { OrganisationsModule } from './organisations/organisations.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
 import { QualityModule } from './quality/quality.module.js';
 import { QuotasModule } from './quotas/quotas.module.js';
+import { ReviewModule } from './review/review.module.js';
 import { UsersModule } from './users/users.module.js';
 
 @Module({})
@@ -60,6 +61,7 @@ export class AppModule {
         BalanceModule,
         QualityModule,
         BackchecksModule,
+        ReviewModule,
         JobsModule,
         AccountsModule,
         OrganisationsModule,

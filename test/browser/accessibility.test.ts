@@ -95,7 +95,17 @@ describe('accessibility and width at 360×640', () => {
 
   it('holds on the supervisor’s pages and the close-cell dialog', async () => {
     const page = await asRole('supervisor@vellmoor.example', '/supervisor');
-    const problems = await checkPages(page, ['/supervisor/review', '/supervisor/interviewers', '/supervisor']);
+    const problems = await checkPages(page, ['/supervisor/review']);
+    // The review queue with an interview opened and the reason dialog up.
+    await page.getByText('Details, reasons and decisions').first().click();
+    problems.push(...(await checkPage(page, 'review queue, an interview opened')));
+    await page.getByRole('checkbox').first().check();
+    await page.getByRole('group', { name: 'Decide on the selected interviews' }).getByRole('button', { name: 'Reject' }).click();
+    const reason = page.getByRole('dialog', { name: 'Reject 1 interview?' });
+    await reason.waitFor();
+    problems.push(...(await checkPage(page, 'review decision dialog')));
+    await reason.getByRole('button', { name: 'Cancel' }).click();
+    problems.push(...(await checkPages(page, ['/supervisor/interviewers', '/supervisor'])));
     await page.getByRole('button', { name: /^Close cell / }).first().click();
     const dialog = page.getByRole('dialog', { name: 'Close this cell?' });
     await dialog.waitFor();
@@ -117,6 +127,7 @@ describe('accessibility and width at 360×640', () => {
       '/lead/projects/new',
       `/lead/projects/${project}/quota-board`,
       `/lead/projects/${project}/interviewers`,
+      `/lead/projects/${project}/review`,
       '/lead/balance',
       '/lead/benchmarks',
       '/lead/delivery',

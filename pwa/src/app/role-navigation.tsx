@@ -39,6 +39,7 @@ const ProjectsPage = page(leadPages, 'ProjectsPage');
 const NewProjectPage = page(leadPages, 'NewProjectPage');
 const ProjectQuotaBoardPage = page(leadPages, 'ProjectQuotaBoardPage');
 const ProjectInterviewersPage = page(leadPages, 'ProjectInterviewersPage');
+const ProjectReviewQueuePage = page(leadPages, 'ProjectReviewQueuePage');
 const BenchmarksPage = page(leadPages, 'BenchmarksPage');
 const DeliveryPage = page(leadPages, 'DeliveryPage');
 const PeoplePage = page(adminPages, 'PeoplePage');
@@ -79,6 +80,7 @@ export const roleNavigation: Record<Role, NavItem[]> = {
         { path: '/lead/projects/:projectId', element: <ProjectPage /> },
         { path: '/lead/projects/:projectId/quota-board', element: <ProjectQuotaBoardPage /> },
         { path: '/lead/projects/:projectId/interviewers', element: <ProjectInterviewersPage /> },
+        { path: '/lead/projects/:projectId/review', element: <ProjectReviewQueuePage /> },
       ],
     },
     { path: '/lead/balance', label: 'Balance', icon: scaleOutline, element: <BalancePage /> },

@@ -36,7 +36,17 @@ let refreshInFlight: Promise<string> | null = null;
 export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
   const useAuth = options.auth ?? true;
   if (!useAuth) return parse<T>(await send(path, options));
+  return parse<T>(await sendSignedIn(path, options));
+}
 
+/** A file the API sends (a CSV export), signed in like apiRequest; a refusal is an ApiError. */
+export async function apiFile(path: string, options: RequestOptions = {}): Promise<Blob> {
+  const response = await sendSignedIn(path, options);
+  if (!response.ok) throw await toApiError(response);
+  return response.blob();
+}
+
+async function sendSignedIn(path: string, options: RequestOptions): Promise<Response> {
   const session = await readSession();
   if (!session) throw new ApiError(signedOutMessage, 'signed-out', 401);
   let response = await send(path, options, session.accessToken);
@@ -44,7 +54,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
     const freshToken = await refreshAccessToken(session.accessToken);
     response = await send(path, options, freshToken);
   }
-  return parse<T>(response);
+  return response;
 }
 
 /**

@@ -433,6 +433,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/interviews/{interviewId}/decisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReviewController_interviewTrail"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{projectId}/interviews/{interviewId}/void": {
         parameters: {
             query?: never;
@@ -505,6 +521,70 @@ export interface paths {
             cookie?: never;
         };
         get: operations["QuotasController_board"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/review": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReviewController_page"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/review/decisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["ReviewController_decide"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/review/decisions.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReviewController_exportTrail"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/review/options": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReviewController_options"];
         put?: never;
         post?: never;
         delete?: never;
@@ -922,6 +1002,18 @@ export interface components {
              */
             perHour: number;
         };
+        CategoryNameResponse: {
+            /** @example 18-34 */
+            label: string;
+            /** @example Age band */
+            variable: string;
+        };
+        CellOptionResponse: {
+            /** Format: uuid */
+            id: string;
+            /** @example age: 18-34 × sex: female */
+            label: string;
+        };
         CellResponse: {
             /** @description Counted interviews in the cell */
             achieved: number;
@@ -1000,6 +1092,27 @@ export interface components {
             /** @enum {string} */
             role: "admin" | "lead" | "supervisor" | "interviewer" | "client";
         };
+        DecidedInterviewResponse: {
+            /** Format: uuid */
+            id: string;
+            /** @enum {string} */
+            newStatus: "pending" | "approved" | "rejected";
+            /** @enum {string} */
+            previousStatus: "pending" | "approved" | "rejected";
+        };
+        DecisionResultResponse: {
+            /** @enum {string} */
+            action: "approve" | "reject" | "reinstate";
+            /** @description How many interviews the decision changed */
+            decided: number;
+            interviews: components["schemas"]["DecidedInterviewResponse"][];
+        };
+        DecisionSelectionDto: {
+            /** @example 2026-11-20 */
+            fieldDay: string;
+            /** Format: uuid */
+            interviewerId: string;
+        };
         DuplicateItemResponse: {
             /** Format: uuid */
             id: string | null;
@@ -1008,6 +1121,12 @@ export interface components {
              * @enum {string}
              */
             status: "duplicate";
+        };
+        FigureResponse: {
+            /** @example medianMinutes */
+            name: string;
+            /** @example 14.5 */
+            value: number | string;
         };
         FindingsSummaryResponse: {
             /**
@@ -1039,6 +1158,13 @@ export interface components {
             total: number;
             /** @description The latest 50 voided interviews, newest first, with why */
             voided: components["schemas"]["VoidedInterviewResponse"][];
+        };
+        FlagOptionResponse: {
+            /** @example over_quota */
+            code: string;
+            explanation: string;
+            /** @example Over quota */
+            label: string;
         };
         HealthResponse: {
             /** @enum {string} */
@@ -1511,6 +1637,76 @@ export interface components {
             /** @example District */
             variable: string;
         };
+        ReviewDecisionDto: {
+            /**
+             * @description reinstate puts a rejected interview back to awaiting review
+             * @enum {string}
+             */
+            action: "approve" | "reject" | "reinstate";
+            /** @description Up to 1000 interview ids (or give selection instead) */
+            interviewIds?: string[];
+            /**
+             * @description Why (1 to 500 characters); kept in the audit trail
+             * @example Timings confirmed with the interviewer
+             */
+            reason: string;
+            /** @description Every interview of one interviewer on one field day (or give interviewIds instead) */
+            selection?: components["schemas"]["DecisionSelectionDto"];
+        };
+        ReviewFlagResponse: {
+            /**
+             * @description Flag code (arrival flags, over_quota, the rules, interviewer_answers, backcheck_not_confirmed)
+             * @example too_short
+             */
+            code: string;
+            /** @description The numbers behind the reason */
+            figures: components["schemas"]["FigureResponse"][];
+            /** @example Too short */
+            label: string;
+            /** @example Took 4.0 min; under a third of the median complete (14.5 min) */
+            reason: string;
+        };
+        ReviewItemResponse: {
+            categories: components["schemas"]["CategoryNameResponse"][];
+            /** @example complete */
+            disposition: string;
+            /** @example 900 */
+            durationSeconds: number;
+            /** Format: date-time */
+            endedAt: string;
+            /** @example 2026-11-20 */
+            fieldDay: string;
+            /** @description Empty for an approved interview */
+            flags: components["schemas"]["ReviewFlagResponse"][];
+            /** @enum {string|null} */
+            headlineAnswer: "yes" | "no" | "dont_know" | "no_answer" | null;
+            /** Format: uuid */
+            id: string;
+            interviewer: components["schemas"]["ReviewPersonResponse"];
+            /** @enum {string} */
+            reviewStatus: "pending" | "approved" | "rejected";
+            /** Format: date-time */
+            startedAt: string;
+        };
+        ReviewOptionsResponse: {
+            cells: components["schemas"]["CellOptionResponse"][];
+            /** @description Field days with interviews, newest first */
+            fieldDays: string[];
+            flags: components["schemas"]["FlagOptionResponse"][];
+            /** @description Interviewers with interviews in the project */
+            interviewers: components["schemas"]["ReviewPersonResponse"][];
+        };
+        ReviewPersonResponse: {
+            /** Format: uuid */
+            id: string;
+            name: string;
+        };
+        ReviewQueueResponse: {
+            /** @description Flagged interviews first, each group newest first */
+            items: components["schemas"]["ReviewItemResponse"][];
+            /** @description Pass as `after` for the next page; null on the last page */
+            nextCursor: string | null;
+        };
         /** @enum {string} */
         Role: "admin" | "lead" | "supervisor" | "interviewer" | "client";
         RuleCountResponse: {
@@ -1695,6 +1891,22 @@ export interface components {
              */
             minimumMinutes: number | null;
         };
+        TrailEntryResponse: {
+            /** @enum {string} */
+            action: "approve" | "reject" | "reinstate";
+            /** Format: date-time */
+            decidedAt: string;
+            decidedBy: components["schemas"]["ReviewPersonResponse"];
+            /** @description Number of the decision in the audit trail */
+            id: string;
+            /** Format: uuid */
+            interviewId: string;
+            /** @enum {string} */
+            newStatus: "pending" | "approved" | "rejected";
+            /** @enum {string} */
+            previousStatus: "pending" | "approved" | "rejected";
+            reason: string;
+        };
         UpdateProjectDto: {
             /**
              * Format: date
@@ -1822,6 +2034,8 @@ export type BalanceMarginResponse = components['schemas']['BalanceMarginResponse
 export type BalanceOutcomeResponse = components['schemas']['BalanceOutcomeResponse'];
 export type BalanceResponse = components['schemas']['BalanceResponse'];
 export type BurstsDto = components['schemas']['BurstsDto'];
+export type CategoryNameResponse = components['schemas']['CategoryNameResponse'];
+export type CellOptionResponse = components['schemas']['CellOptionResponse'];
 export type CellResponse = components['schemas']['CellResponse'];
 export type CellsResponse = components['schemas']['CellsResponse'];
 export type CellStatus = components['schemas']['CellStatus'];
@@ -1829,11 +2043,16 @@ export type ChangeRoleDto = components['schemas']['ChangeRoleDto'];
 export type ContactFiguresResponse = components['schemas']['ContactFiguresResponse'];
 export type CreateProjectDto = components['schemas']['CreateProjectDto'];
 export type CreateUserDto = components['schemas']['CreateUserDto'];
+export type DecidedInterviewResponse = components['schemas']['DecidedInterviewResponse'];
+export type DecisionResultResponse = components['schemas']['DecisionResultResponse'];
+export type DecisionSelectionDto = components['schemas']['DecisionSelectionDto'];
 export type DuplicateItemResponse = components['schemas']['DuplicateItemResponse'];
+export type FigureResponse = components['schemas']['FigureResponse'];
 export type FindingsSummaryResponse = components['schemas']['FindingsSummaryResponse'];
 export type FlagCode = components['schemas']['FlagCode'];
 export type FlagCountResponse = components['schemas']['FlagCountResponse'];
 export type FlaggedInterviewsResponse = components['schemas']['FlaggedInterviewsResponse'];
+export type FlagOptionResponse = components['schemas']['FlagOptionResponse'];
 export type HealthResponse = components['schemas']['HealthResponse'];
 export type InterviewerAnswersDto = components['schemas']['InterviewerAnswersDto'];
 export type InterviewerDayResponse = components['schemas']['InterviewerDayResponse'];
@@ -1877,6 +2096,12 @@ export type RefreshDto = components['schemas']['RefreshDto'];
 export type RejectedItemResponse = components['schemas']['RejectedItemResponse'];
 export type RequestResetDto = components['schemas']['RequestResetDto'];
 export type RetiredCategoryResponse = components['schemas']['RetiredCategoryResponse'];
+export type ReviewDecisionDto = components['schemas']['ReviewDecisionDto'];
+export type ReviewFlagResponse = components['schemas']['ReviewFlagResponse'];
+export type ReviewItemResponse = components['schemas']['ReviewItemResponse'];
+export type ReviewOptionsResponse = components['schemas']['ReviewOptionsResponse'];
+export type ReviewPersonResponse = components['schemas']['ReviewPersonResponse'];
+export type ReviewQueueResponse = components['schemas']['ReviewQueueResponse'];
 export type Role = components['schemas']['Role'];
 export type RuleCountResponse = components['schemas']['RuleCountResponse'];
 export type SaveTargetsDto = components['schemas']['SaveTargetsDto'];
@@ -1898,6 +2123,7 @@ export type TargetsResponse = components['schemas']['TargetsResponse'];
 export type TargetVariableDto = components['schemas']['TargetVariableDto'];
 export type TargetVariableResponse = components['schemas']['TargetVariableResponse'];
 export type TooShortDto = components['schemas']['TooShortDto'];
+export type TrailEntryResponse = components['schemas']['TrailEntryResponse'];
 export type UpdateProjectDto = components['schemas']['UpdateProjectDto'];
 export type UserProfileResponse = components['schemas']['UserProfileResponse'];
 export type UserResponse = components['schemas']['UserResponse'];
@@ -2623,6 +2849,28 @@ export interface operations {
             };
         };
     };
+    ReviewController_interviewTrail: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                interviewId: string;
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TrailEntryResponse"][];
+                };
+            };
+        };
+    };
     InterviewsController_void: {
         parameters: {
             query?: never;
@@ -2734,6 +2982,109 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["QuotaBoardResponse"];
+                };
+            };
+        };
+    };
+    ReviewController_page: {
+        parameters: {
+            query?: {
+                /** @description The nextCursor of the previous page */
+                after?: string;
+                /** @description Only interviews in this quota cell (in all of its categories) */
+                cellId?: string;
+                /** @description Only interviews of this field day (YYYY-MM-DD) */
+                fieldDay?: string;
+                /** @description Only interviews carrying this flag */
+                flag?: "project_closed" | "outside_field_dates" | "voided" | "retired_category" | "missing_variable" | "retired_variable" | "over_quota" | "too_short" | "overlapping" | "out_of_hours" | "burst" | "interviewer_answers" | "backcheck_not_confirmed";
+                /** @description Only this interviewer's interviews */
+                interviewerId?: string;
+                /** @description Interviews per page (default 50) */
+                limit?: number;
+                status?: "pending" | "approved" | "rejected";
+            };
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReviewQueueResponse"];
+                };
+            };
+        };
+    };
+    ReviewController_decide: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ReviewDecisionDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DecisionResultResponse"];
+                };
+            };
+        };
+    };
+    ReviewController_exportTrail: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description CSV, one row per review decision */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                };
+            };
+        };
+    };
+    ReviewController_options: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReviewOptionsResponse"];
                 };
             };
         };

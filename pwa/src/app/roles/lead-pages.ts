@@ -4,5 +4,6 @@ export { ProjectsPage } from '../../features/projects/pages/projects-page';
 export { NewProjectPage } from '../../features/projects/pages/new-project-page';
 export { ProjectQuotaBoardPage } from '../../features/quotas/pages/project-quota-board-page';
 export { ProjectInterviewersPage } from '../../features/team/pages/project-interviewers-page';
+export { ProjectReviewQueuePage } from '../../features/review/pages/review-queue-page';
 export { BenchmarksPage } from '../../features/benchmarks/pages/benchmarks-page';
 export { DeliveryPage } from '../../features/delivery/pages/delivery-page';

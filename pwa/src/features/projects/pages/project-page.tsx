@@ -38,6 +38,9 @@ export function ProjectPage() {
               <Link to={`/lead/projects/${p.id}/quota-board`} className="pl-back-link">
                 Quota board →
               </Link>
+              <Link to={`/lead/projects/${p.id}/review`} className="pl-back-link">
+                Review queue →
+              </Link>
               <Link to={`/lead/projects/${p.id}/interviewers`} className="pl-back-link">
                 Interviewers →
               </Link>
