@@ -1,8 +1,8 @@
 // The supervisor's review queue on a phone (360×640) against the seeded demo: filter the queue
 // by a flag, reject one interviewer's day with a reason, and see the quota board's count drop.
-// The flag is a finding written here for that day's interviews (what the quality rules would
-// store); at the end the day is reinstated and the findings written here removed, so the demo
-// is left as found (the trail keeps both decisions: it is append-only).
+// The flag is one the demo's quality rules found (its speeding interviewer's too-short completes);
+// at the end the day is reinstated, so the demo is left as found (the trail keeps both
+// decisions: it is append-only).
 import knex, { type Knex } from 'knex';
 import { afterAll, afterEach, beforeAll, describe, expect, inject, it } from 'vitest';
 import { openBrowser, PHONE, screenshot, signIn, type Browser } from './browser.js';
@@ -11,8 +11,7 @@ import { api, tokenFor, vellmoorId } from './fieldwork-steps.js';
 const baseUrl = inject('baseUrl');
 let browser: Browser | undefined;
 let db: Knex;
-let added: string[] = [];
-let day: { interviewerId: string; interviewer: string; fieldDay: string; ids: string[]; categories: string[][] };
+let day: { interviewerId: string; interviewer: string; fieldDay: string; ids: string[]; categories: string[][]; reasons: string[] };
 let projectId: string;
 let token: string;
 
@@ -20,19 +19,21 @@ beforeAll(async () => {
   db = knex({ client: 'pg', connection: process.env.DATABASE_URL });
   token = (await tokenFor(baseUrl, 'supervisor@vellmoor.example')).token;
   projectId = await vellmoorId(baseUrl, token);
-  // A day of one interviewer with a few counted completes, all awaiting review.
+  // A day of one interviewer with a few counted completes, all awaiting review, some of them too short.
   const { rows } = await db.raw<{ rows: { interviewer_id: string; field_day: string }[] }>(
-    `SELECT interviewer_id, field_day::text FROM interviews WHERE project_id = ? GROUP BY 1, 2
-      HAVING bool_and(review_status = 'pending') AND count(*) FILTER (WHERE counted) BETWEEN 2 AND 6
-      ORDER BY field_day DESC, interviewer_id LIMIT 1`, [projectId]);
+    `SELECT i.interviewer_id, i.field_day::text FROM interviews i
+      WHERE i.project_id = ? GROUP BY 1, 2
+      HAVING bool_and(i.review_status = 'pending') AND count(*) FILTER (WHERE i.counted) BETWEEN 2 AND 8
+         AND count(*) FILTER (WHERE EXISTS (SELECT 1 FROM interview_findings f WHERE f.interview_id = i.id AND f.rule = 'too_short')) >= 2
+      ORDER BY 2 DESC, 1 LIMIT 1`, [projectId]);
   const pick = rows[0]!;
   const interviews = await db('interviews').where({ project_id: projectId, interviewer_id: pick.interviewer_id, field_day: pick.field_day, counted: true }).select('id', 'category_ids');
   const person = await db('users').where({ id: pick.interviewer_id }).first('name');
-  day = { interviewerId: pick.interviewer_id, interviewer: person!.name, fieldDay: pick.field_day, ids: interviews.map((i) => i.id), categories: interviews.map((i) => i.category_ids) };
-  const inserted = await db('interview_findings')
-    .insert(day.ids.map((id) => ({ interview_id: id, project_id: projectId, rule: 'too_short', reason: 'Took 3 min; under a third of the median complete (14 min)', figures: { minutes: 3, medianMinutes: 14 } })))
-    .onConflict(['interview_id', 'rule']).ignore().returning('interview_id');
-  added = inserted.map((r) => r.interview_id);
+  const findings = await db('interview_findings').whereIn('interview_id', interviews.map((i) => i.id)).andWhere('rule', 'too_short').select('interview_id', 'reason');
+  day = {
+    interviewerId: pick.interviewer_id, interviewer: person!.name, fieldDay: pick.field_day,
+    ids: interviews.map((i) => i.id), categories: interviews.map((i) => i.category_ids), reasons: findings.map((f) => f.reason),
+  };
 });
 
 afterEach(async () => {
@@ -45,7 +46,6 @@ afterAll(async () => {
   if (statuses.includes('rejected')) {
     await api(baseUrl, token, `/projects/${projectId}/review/decisions`, 'POST', { action: 'reinstate', reason: 'Browser test: put back as found', selection: { interviewerId: day.interviewerId, fieldDay: day.fieldDay } });
   }
-  if (added.length) await db('interview_findings').whereIn('interview_id', added).andWhere('rule', 'too_short').delete();
   await db.destroy();
 });
 
@@ -69,17 +69,21 @@ describe('the review queue on a phone', () => {
     const cards = page.getByRole('list', { name: 'Interviews to review' }).locator(':scope > li');
     const allTooShort = async () => {
       const texts = await cards.allTextContents();
-      return texts.length >= day.ids.length && texts.every((t) => t.includes('Too short'));
+      return texts.length >= day.reasons.length && texts.every((t) => t.includes('Too short'));
     };
     await expect.poll(allTooShort).toBe(true);
     await page.getByLabel('Interviewer', { exact: true }).selectOption({ label: day.interviewer });
     await page.getByLabel('Field day', { exact: true }).selectOption(day.fieldDay);
-    await expect.poll(() => cards.count()).toBe(day.ids.length);
+    await expect.poll(() => cards.count()).toBe(day.reasons.length);
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(360);
     await screenshot(page, 'phone-supervisor-review-queue');
 
     await cards.first().getByText('Details, reasons and decisions').click();
-    await cards.first().getByText('Took 3 min; under a third of the median complete (14 min)').waitFor();
+    // The opened card shows its finding's own reason, with the figures behind it.
+    await expect.poll(async () => {
+      const opened = (await cards.first().textContent()) ?? '';
+      return day.reasons.some((reason) => opened.includes(reason));
+    }).toBe(true);
     await cards.first().getByRole('button', { name: 'Reject the day' }).click();
     const dialog = page.getByRole('dialog', { name: /^Reject all of .* interviews on / });
     await dialog.getByLabel('Reason (required)').fill('Whole day too short to be real interviews');
