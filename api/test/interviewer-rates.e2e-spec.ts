@@ -83,7 +83,8 @@ describe('interviewers’ rates', () => {
     const mine = byId.get(org.users.interviewer.id) as Record<string, unknown> & { days: { fieldDay: string; contacts: number; completes: number }[] };
     expect(mine).toMatchObject({ contacts: 13, completes: 4, outcomes: { quota_full: 1, not_eligible: 1, non_contact: 3 }, medianDurationSeconds: 15 * 60 });
     expect(mine.days.map((d) => [d.fieldDay, d.contacts, d.completes])).toEqual([['2026-11-20', 10, 2], ['2026-11-21', 3, 2]]);
-    expect(mine).toMatchObject({ findings: [], test: null, backchecks: { selected: 0, confirmed: 0, notConfirmed: 0, notReached: 0, pending: 0 } });
+    // Every interviewer with completes has at least one back-check (their first complete here), not yet done.
+    expect(mine).toMatchObject({ findings: [], test: null, backchecks: { selected: 1, confirmed: 0, notConfirmed: 0, notReached: 0, pending: 1 } });
   });
 
   it('refuses eligibility on an outcome that does not ask for it, storing nothing', async () => {

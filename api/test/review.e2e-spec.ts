@@ -2,8 +2,9 @@
 // many interviews with a reason, each kept in an append-only audit trail; a rejected interview
 // leaves the cells, the balance and the export at once and comes back when reinstated.
 import type { OpenAPIObject } from '@nestjs/swagger';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { buildOpenApiDocument } from '../src/openapi/openapi-document.js';
+import { QUALITY_FLAGS } from '../src/quality/quality-flags.js';
 import { client, complete, pick, syncProject, type Targets } from './fieldwork-helpers.js';
 import { startApp, type Harness, type TestOrg } from './harness.js';
 import { conformanceProblems, responseSchema } from './openapi-conformance.js';
@@ -35,6 +36,17 @@ const queue = async (query = '') => {
   return res.body as { items: Item[]; nextCursor: string | null };
 };
 const decide = (body: object, who: Api = supervisor) => who.post(`${base}/review/decisions`, body);
+/** The time on the database's clock: a run of the quality rules after it has the sync before it in view. */
+const dbNow = async () => (await h.db.raw<{ rows: [{ now: Date }] }>('SELECT now() AS now')).rows[0].now.getTime();
+/**
+ * A sync queues a run of the quality rules, which replaces the project's findings and
+ * interviewer tests: wait for the run after `since` before writing rows a case reads.
+ */
+const qualityRunAfter = (since: number) =>
+  vi.waitFor(async () => {
+    const row = await h.db('projects').where({ id: org.projectId }).first('quality_checked_at');
+    if (!(row!.quality_checked_at && row!.quality_checked_at.getTime() > since)) throw new Error('the quality rules have not run since the sync');
+  }, { timeout: 60_000, interval: 100 });
 const statusOf = async (id: string) => (await h.db('interviews').where({ id }).first('review_status'))!.review_status;
 
 beforeAll(async () => {
@@ -47,7 +59,9 @@ beforeAll(async () => {
     ...[8, 9, 10].map((hour) => complete(young(), 'yes' as never, at('2026-11-20', hour))),
     ...[8, 9].map((hour) => complete(young(), 'no' as never, at('2026-11-21', hour))),
   ];
+  const since = await dbNow();
   expect((await interviewer.post(syncPath, { interviews: batch })).body.accepted).toBe(5);
+  await qualityRunAfter(since);
   day1.push(...batch.slice(0, 3).map((i) => i.id));
   day2.push(...batch.slice(3).map((i) => i.id));
   // What the quality rules would have found: the last interview of day 1 too short.
@@ -207,9 +221,12 @@ describe('every kind of flag', () => {
     const northId = cells.find((c) => c.label === 'region: North')!.id;
     await supervisor.post(`${base}/cells/${northId}/close`);
     const [late, checked] = [complete(young(), 'yes' as never, at('2026-11-23', 9)), complete(young(), 'no' as never, at('2026-11-23', 8))];
+    const since = await dbNow();
     expect((await interviewer.post(syncPath, { interviews: [late, checked] })).body.accepted).toBe(2);
     await supervisor.post(`${base}/cells/${northId}/reopen`);
-    await h.db('interviewer_tests').insert({ project_id: org.projectId, interviewer_id: org.users.interviewer.id, completes: 40, p_value: 0.0012, adjusted_p_value: 0.03, flagged: true, reason: 'Answers yes more often than the others in the same cells', figures: { completes: 40 } });
+    await qualityRunAfter(since);
+    await h.db('interviewer_tests').insert({ project_id: org.projectId, interviewer_id: org.users.interviewer.id, completes: 40, p_value: 0.0012, adjusted_p_value: 0.03, flagged: true, reason: 'Answers yes more often than the others in the same cells', figures: { completes: 40 } })
+      .onConflict(['project_id', 'interviewer_id']).merge();
     await h.db('backchecks').insert({ interview_id: checked.id, project_id: org.projectId, interviewer_id: org.users.interviewer.id, share_at_selection: 0.1, outcome: 'not_confirmed', outcome_note: 'Respondent says nobody called', recorded_by: org.users.supervisor.id, recorded_at: new Date() });
 
     const byFlag = async (flag: string) => (await queue(`?flag=${flag}&fieldDay=2026-11-23`)).items;
@@ -217,7 +234,7 @@ describe('every kind of flag', () => {
     expect(overQuota!.flags.find((f) => f.code === 'over_quota')).toEqual({ code: 'over_quota', label: 'Over quota', reason: 'Arrived when region: North was full or closed', figures: [{ name: 'cells', value: 1 }] });
     expect((await byFlag('interviewer_answers')).map((i) => i.id)).toEqual([late.id, checked.id]);
     expect(overQuota!.flags.find((f) => f.code === 'interviewer_answers')).toEqual({
-      code: 'interviewer_answers', label: 'Interviewer\'s answers differ', reason: 'Answers yes more often than the others in the same cells',
+      code: 'interviewer_answers', label: QUALITY_FLAGS.interviewer_answers.label, reason: 'Answers yes more often than the others in the same cells',
       figures: [{ name: 'pValue', value: 0.0012 }, { name: 'adjustedPValue', value: 0.03 }, { name: 'completes', value: 40 }],
     });
     const [backchecked] = await byFlag('backcheck_not_confirmed');

@@ -1182,6 +1182,15 @@ export interface components {
             /** @example 20 */
             minimumCompletes: number;
         };
+        InterviewerAnswerTestResponse: {
+            /** @description Benjamini–Hochberg adjusted */
+            adjustedPValue: number | null;
+            /** @description Completes tested */
+            completes: number;
+            flagged: boolean;
+            pValue: number | null;
+            reason: string;
+        };
         InterviewerDayResponse: {
             /** @description Counted completes */
             completes: number;
@@ -1235,7 +1244,7 @@ export interface components {
             /** @description Contacts, neither voided nor rejected */
             contacts: number;
             days: components["schemas"]["InterviewerDayResponse"][];
-            findings: components["schemas"]["RuleCountResponse"][];
+            findings: components["schemas"]["InterviewerRuleCountResponse"][];
             groups: components["schemas"]["AaporGroupsResponse"];
             /** Format: uuid */
             interviewerId: string;
@@ -1245,15 +1254,26 @@ export interface components {
             name: string;
             outcomes: components["schemas"]["OutcomeMixResponse"];
             rates: components["schemas"]["ShownRatesResponse"];
-            test: components["schemas"]["InterviewerTestResponse"] | null;
+            test: components["schemas"]["InterviewerAnswerTestResponse"] | null;
+        };
+        InterviewerRuleCountResponse: {
+            /** @description Interviews not approved that the rule found */
+            count: number;
+            /** @example too_short */
+            rule: string;
         };
         InterviewerTestResponse: {
-            /** @description Benjamini–Hochberg adjusted */
+            /** @description Benjamini–Hochberg adjusted p-value; null when not tested */
             adjustedPValue: number | null;
-            /** @description Completes tested */
+            /** @description Counted completes that answered the headline question yes or no */
             completes: number;
             flagged: boolean;
+            /** Format: uuid */
+            interviewerId: string;
+            name: string;
+            /** @description Cochran–Mantel–Haenszel p-value; null when not tested */
             pValue: number | null;
+            /** @description The result in words, with the figures behind it */
             reason: string;
         };
         InvitePersonDto: {
@@ -1710,10 +1730,17 @@ export interface components {
         /** @enum {string} */
         Role: "admin" | "lead" | "supervisor" | "interviewer" | "client";
         RuleCountResponse: {
-            /** @description Interviews not approved that the rule found */
-            count: number;
-            /** @example too_short */
-            rule: string;
+            /**
+             * @example too_short
+             * @enum {string}
+             */
+            code: "too_short" | "overlapping" | "out_of_hours" | "burst" | "interviewer_answers" | "backcheck_not_confirmed";
+            /** @description One sentence saying what trips the flag */
+            explanation: string;
+            /** @description Interviews carrying the flag, approved ones left out */
+            interviews: number;
+            /** @example Too short */
+            label: string;
         };
         SaveTargetsDto: {
             /** @description Joint shares of the interlocked variables (every combination); without them cell targets are the product of the margins */
@@ -2055,10 +2082,12 @@ export type FlaggedInterviewsResponse = components['schemas']['FlaggedInterviews
 export type FlagOptionResponse = components['schemas']['FlagOptionResponse'];
 export type HealthResponse = components['schemas']['HealthResponse'];
 export type InterviewerAnswersDto = components['schemas']['InterviewerAnswersDto'];
+export type InterviewerAnswerTestResponse = components['schemas']['InterviewerAnswerTestResponse'];
 export type InterviewerDayResponse = components['schemas']['InterviewerDayResponse'];
 export type InterviewerEffectResponse = components['schemas']['InterviewerEffectResponse'];
 export type InterviewerProgressResponse = components['schemas']['InterviewerProgressResponse'];
 export type InterviewerRatesResponse = components['schemas']['InterviewerRatesResponse'];
+export type InterviewerRuleCountResponse = components['schemas']['InterviewerRuleCountResponse'];
 export type InterviewerTestResponse = components['schemas']['InterviewerTestResponse'];
 export type InvitePersonDto = components['schemas']['InvitePersonDto'];
 export type JointShareDto = components['schemas']['JointShareDto'];

@@ -48,12 +48,12 @@ export class InterviewerDayResponse extends ContactFiguresResponse implements In
   medianDurationSeconds: number | null;
 }
 
-export class RuleCountResponse {
+export class InterviewerRuleCountResponse {
   @ApiProperty({ example: 'too_short' }) rule: string;
   @count('Interviews not approved that the rule found') count: number;
 }
 
-export class InterviewerTestResponse {
+export class InterviewerAnswerTestResponse {
   @count('Completes tested') completes: number;
   @ApiProperty({ type: 'number', nullable: true }) pValue: number | null;
   @ApiProperty({ type: 'number', nullable: true, description: 'Benjamini–Hochberg adjusted' }) adjustedPValue: number | null;
@@ -74,8 +74,8 @@ export class InterviewerRatesResponse extends ContactFiguresResponse implements 
   @ApiProperty({ example: 'Ada Fenwick' }) name: string;
   @ApiProperty({ type: 'number', nullable: true, description: 'Median length of counted completes, in seconds' })
   medianDurationSeconds: number | null;
-  @ApiProperty({ type: [RuleCountResponse] }) findings: RuleCountResponse[];
-  @ApiProperty({ type: InterviewerTestResponse, nullable: true }) test: InterviewerTestResponse | null;
+  @ApiProperty({ type: [InterviewerRuleCountResponse] }) findings: InterviewerRuleCountResponse[];
+  @ApiProperty({ type: InterviewerAnswerTestResponse, nullable: true }) test: InterviewerAnswerTestResponse | null;
   @ApiProperty({ type: BackcheckTallyResponse }) backchecks: BackcheckTallyResponse;
   @ApiProperty({ type: [InterviewerDayResponse] }) days: InterviewerDayResponse[];
 }
