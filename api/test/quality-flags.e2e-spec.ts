@@ -160,6 +160,19 @@ describe('the lead\'s quality rules', () => {
     expect((await lead.patch(base, { timeZone: 'Europe/London' })).status).toBe(200);
   }, 70_000);
 
+  it('moves the outside-the-field-dates flag with the field dates when they change after interviews arrived', async () => {
+    const outside = async () => (await h.db('interviews').where({ project_id: org.projectId }).whereRaw("'outside_field_dates' = ANY (flags)").pluck('field_day')).length;
+    const lateDays = await h.db('interviews').where({ project_id: org.projectId }).andWhere('field_day', '>', '2026-11-19').count<{ count: string }[]>('* as count');
+    expect(Number(lateDays[0]!.count)).toBeGreaterThan(0);
+    // Field dates 16–18 November: anything after the 19th (a day of slack) is outside them.
+    expect((await lead.patch(base, { fieldStart: '2026-11-16', fieldEnd: '2026-11-18' })).status).toBe(200);
+    await recompute();
+    expect(await outside()).toBe(Number(lateDays[0]!.count));
+    expect((await lead.patch(base, { fieldEnd: '2026-12-31' })).status).toBe(200);
+    await recompute();
+    expect(await outside()).toBe(0);
+  });
+
   it.each([
     ['a fraction of 0', { tooShort: { enabled: true, fractionOfMedian: 0, minimumMinutes: null } }, 'fractionOfMedian must be more than 0 and at most 1'],
     ['a time that is not HH:MM', { outOfHours: { enabled: true, from: '8am', to: '21:00' } }, 'from must be a time of day written HH:MM, such as 08:00'],

@@ -3,6 +3,7 @@
 // over Knex, so the job worker, the command line, the demo seed and the benchmark share it.
 import type { Knex } from 'knex';
 import type { ProjectRow } from '../database/tables.js';
+import { FIELD_DATE_TOLERANCE_DAYS } from '../interviews/flags.js';
 import { timingFindings, type TimedInterview } from './interview-rules.js';
 import { interviewerAnswerTests, type AnsweredComplete, type InterviewerAnswerTest } from './interviewer-answers.js';
 import { qualitySettings } from './quality-settings.js';
@@ -51,6 +52,22 @@ function testFigures(t: InterviewerAnswerTest): Record<string, number> {
   return figures;
 }
 
+/**
+ * The field dates may move after interviews arrived: the arrival flag 'outside_field_dates'
+ * (interviews.flags) follows the dates as they are now, with the same day of slack as on arrival.
+ * Only rows whose flag changes are written, so a run with unchanged dates writes nothing.
+ */
+async function refreshFieldDateFlags(trx: Knex.Transaction, projectId: string): Promise<void> {
+  await trx.raw(
+    `UPDATE interviews i
+        SET flags = CASE WHEN o.outside THEN array_append(i.flags, 'outside_field_dates') ELSE array_remove(i.flags, 'outside_field_dates') END
+       FROM (SELECT j.id, coalesce(j.field_day < p.field_start - ?::int, false) OR coalesce(j.field_day > p.field_end + ?::int, false) AS outside
+               FROM interviews j JOIN projects p ON p.id = j.project_id WHERE j.project_id = ?) o
+      WHERE i.id = o.id AND ('outside_field_dates' = ANY (i.flags)) IS DISTINCT FROM o.outside`,
+    [FIELD_DATE_TOLERANCE_DAYS, FIELD_DATE_TOLERANCE_DAYS, projectId],
+  );
+}
+
 /** Runs every rule the project's settings switch on and stores what they found. */
 export async function runQualityCheck(db: Knex, projectId: string): Promise<QualityCheckResult> {
   return db.transaction(async (trx) => {
@@ -85,6 +102,7 @@ export async function runQualityCheck(db: Knex, projectId: string): Promise<Qual
 
     // Only now the project's row: held for the writes alone, so syncs wait as little as possible.
     const [{ now }] = (await trx.raw<{ rows: { now: Date }[] }>('SELECT now() AS now FROM projects WHERE id = ? FOR NO KEY UPDATE', [projectId])).rows as [{ now: Date }];
+    await refreshFieldDateFlags(trx, projectId);
     await trx('interview_findings').where({ project_id: projectId }).delete();
     await trx('interviewer_tests').where({ project_id: projectId }).delete();
     if (ids.length) {
