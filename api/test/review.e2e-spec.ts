@@ -1,6 +1,7 @@
 // The review queue (issue 11, item 2): flagged interviews first, filtered; decisions on one or
 // many interviews with a reason, each kept in an append-only audit trail; a rejected interview
 // leaves the cells, the balance and the export at once and comes back when reinstated.
+import { randomUUID } from 'node:crypto';
 import type { OpenAPIObject } from '@nestjs/swagger';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { buildOpenApiDocument } from '../src/openapi/openapi-document.js';
@@ -221,8 +222,10 @@ describe('every kind of flag', () => {
     const northId = cells.find((c) => c.label === 'region: North')!.id;
     await supervisor.post(`${base}/cells/${northId}/close`);
     const [late, checked] = [complete(young(), 'yes' as never, at('2026-11-23', 9)), complete(young(), 'no' as never, at('2026-11-23', 8))];
+    // A refusal the same day: the answer test is about headline answers, so it does not mark it.
+    const refused = { id: randomUUID(), disposition: 'refusal', startedAt: at('2026-11-23', 7), endedAt: at('2026-11-23', 7) };
     const since = await dbNow();
-    expect((await interviewer.post(syncPath, { interviews: [late, checked] })).body.accepted).toBe(2);
+    expect((await interviewer.post(syncPath, { interviews: [late, checked, refused] })).body.accepted).toBe(3);
     await supervisor.post(`${base}/cells/${northId}/reopen`);
     await qualityRunAfter(since);
     await h.db('interviewer_tests').insert({ project_id: org.projectId, interviewer_id: org.users.interviewer.id, completes: 40, p_value: 0.0012, adjusted_p_value: 0.03, flagged: true, reason: 'Answers yes more often than the others in the same cells', figures: { completes: 40 } })
@@ -233,6 +236,8 @@ describe('every kind of flag', () => {
     const [overQuota] = await byFlag('over_quota');
     expect(overQuota!.flags.find((f) => f.code === 'over_quota')).toEqual({ code: 'over_quota', label: 'Over quota', reason: 'Arrived when region: North was full or closed', figures: [{ name: 'cells', value: 1 }] });
     expect((await byFlag('interviewer_answers')).map((i) => i.id)).toEqual([late.id, checked.id]);
+    const refusal = (await queue('?fieldDay=2026-11-23')).items.find((i) => i.id === refused.id)!;
+    expect(refusal.flags.map((f) => f.code)).not.toContain('interviewer_answers');
     expect(overQuota!.flags.find((f) => f.code === 'interviewer_answers')).toEqual({
       code: 'interviewer_answers', label: QUALITY_FLAGS.interviewer_answers.label, reason: 'Answers yes more often than the others in the same cells',
       figures: [{ name: 'pValue', value: 0.0012 }, { name: 'adjustedPValue', value: 0.03 }, { name: 'completes', value: 40 }],

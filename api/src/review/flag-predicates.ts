@@ -19,7 +19,8 @@ const flaggedInterviewers = (db: Knex, projectId: string) => db('interviewer_tes
 /** The condition "carries this flag", or "carries any flag" when none is given. */
 export function hasFlag(db: Knex, projectId: string, flag?: string): Condition {
   if (flag === 'over_quota') return (q) => q.where('i.over_quota', true);
-  if (flag === 'interviewer_answers') return (q) => q.whereIn('i.interviewer_id', flaggedInterviewers(db, projectId));
+  // The answer test is about headline answers: it marks the interviewer's completes, not their other contacts.
+  if (flag === 'interviewer_answers') return (q) => q.where('i.disposition', 'complete').whereIn('i.interviewer_id', flaggedInterviewers(db, projectId));
   if (flag === 'backcheck_not_confirmed') return (q) => q.whereIn('i.id', backchecks(db, projectId));
   if (flag && (FINDING_RULES as readonly string[]).includes(flag)) return (q) => q.whereIn('i.id', findings(db, projectId, flag));
   if (flag) return (q) => q.whereRaw('? = ANY(i.flags)', [flag]);
@@ -30,6 +31,6 @@ export function hasFlag(db: Knex, projectId: string, flag?: string): Condition {
         .orWhere('i.over_quota', true)
         .orWhereIn('i.id', findings(db, projectId))
         .orWhereIn('i.id', backchecks(db, projectId))
-        .orWhereIn('i.interviewer_id', flaggedInterviewers(db, projectId)),
+        .orWhere((answers) => answers.where('i.disposition', 'complete').whereIn('i.interviewer_id', flaggedInterviewers(db, projectId))),
     );
 }

@@ -19,7 +19,7 @@ const DETAILS = {
       FROM interview_findings f WHERE f.interview_id = i.id)`,
   backcheck_note: `(SELECT coalesce(b.outcome_note, '') FROM backchecks b WHERE b.interview_id = i.id AND b.outcome = 'not_confirmed')`,
   interviewer_test: `(SELECT json_build_object('reason', t.reason, 'figures', t.figures, 'p_value', t.p_value, 'adjusted_p_value', t.adjusted_p_value)
-      FROM interviewer_tests t WHERE t.project_id = i.project_id AND t.interviewer_id = i.interviewer_id AND t.flagged)`,
+      FROM interviewer_tests t WHERE i.disposition = 'complete' AND t.project_id = i.project_id AND t.interviewer_id = i.interviewer_id AND t.flagged)`,
   over_quota_labels: `(SELECT coalesce(json_agg(q.label ORDER BY q.position), '[]') FROM quota_cells q WHERE q.id = ANY(i.over_quota_cells))`,
 } satisfies Record<keyof RowDetails, string>;
 
