@@ -2,7 +2,8 @@
 // log-contact form). A reference is a short code from the agency's own contact sheet, so a
 // supervisor can find the respondent again for a back-check. It is still pseudonymous personal
 // data (GDPR Recital 26), so it must never be a direct identifier: no name (spaces and most
-// punctuation are refused), no e-mail address, no phone number (7 or more digits in a row).
+// punctuation are refused), no e-mail address, no phone number (7 or more digits in a row, spaces,
+// dots, brackets, plus signs and - _ / between them ignored).
 
 export const REFERENCE_MAX_LENGTH = 20;
 
@@ -13,7 +14,7 @@ export function referenceProblem(reference) {
   if (typeof reference !== 'string') return 'The reference must be text';
   if (reference.length === 0) return 'The reference must not be empty; leave it out instead';
   if (reference.includes('@')) return 'This looks like an e-mail address: enter only the code from your contact sheet';
-  if (/\d{7,}/.test(reference.replace(/[-_/]/g, ''))) {
+  if (/\d{7,}/.test(reference.replace(/[-_/\s.()+]/g, ''))) {
     return 'This looks like a phone number: enter only the code from your contact sheet';
   }
   if (reference.length > REFERENCE_MAX_LENGTH) return `The reference must be at most ${REFERENCE_MAX_LENGTH} characters long`;

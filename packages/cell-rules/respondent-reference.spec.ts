@@ -10,6 +10,8 @@ describe('respondent reference', () => {
     expect(referenceProblem('ann@example.org')).toMatch(/e-mail/);
     expect(referenceProblem('07700900123')).toMatch(/phone number/);
     expect(referenceProblem('0770-090-0123')).toMatch(/phone number/);
+    expect(referenceProblem('07700 900123')).toMatch(/phone number/);
+    expect(referenceProblem('+44 (0)7700 900.123')).toMatch(/phone number/);
     expect(referenceProblem('VM-123456')).toBeNull();
   });
 

@@ -1,7 +1,7 @@
 import { RadioGroup } from '../../../components/radio-group';
 
 const options = [
-  { value: true, label: 'Yes, someone in the survey’s population lives here' },
+  { value: true, label: 'Yes' },
   { value: false, label: 'Not known' },
 ];
 

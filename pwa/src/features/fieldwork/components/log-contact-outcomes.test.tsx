@@ -61,7 +61,7 @@ describe('outcomes for the office’s rates', () => {
     const user = await openLog();
     await user.click(screen.getByRole('radio', { name: 'Non-contact' }));
     const question = screen.getByRole('radiogroup', { name: 'Does someone in the survey’s population live here?' });
-    await user.click(within(question).getByRole('radio', { name: /Yes, someone/ }));
+    await user.click(within(question).getByRole('radio', { name: 'Yes' }));
     await user.click(screen.getByRole('button', { name: 'Save non-contact' }));
 
     expect(await screen.findByText(/Non-contact saved on this device/)).toBeInTheDocument();
