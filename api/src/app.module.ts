@@ -23,6 +23,7 @@ import { InterviewersModule } from './interviewers/interviewers.module.js';
 import { InterviewsModule } from './interviews/interviews.module.js';
 import { JobsModule } from './jobs/jobs.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
+import { ProjectionModule } from './projection/projection.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
 import { QualityModule } from './quality/quality.module.js';
 import { QuotasModule } from './quotas/quotas.module.js';
@@ -54,6 +55,7 @@ export class AppModule {
         AuthModule,
         UsersModule,
         ProjectsModule,
+        ProjectionModule,
         QuotasModule,
         AssignmentsModule,
         InterviewsModule,

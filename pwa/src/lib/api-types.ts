@@ -513,6 +513,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/projection": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ProjectionController_projection"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{projectId}/quota-board": {
         parameters: {
             query?: never;
@@ -1057,6 +1073,14 @@ export interface components {
             outcomes: components["schemas"]["OutcomeMixResponse"];
             rates: components["schemas"]["ShownRatesResponse"];
         };
+        CountIntervalResponse: {
+            /** @description Expected count */
+            expected: number;
+            /** @description Lower end of the central interval at `level` */
+            lower: number;
+            /** @description Upper end of the central interval at `level` */
+            upper: number;
+        };
         CreateProjectDto: {
             /**
              * Format: date
@@ -1467,6 +1491,29 @@ export interface components {
              */
             status: "invited" | "active" | "disabled";
         };
+        ProjectedCellResponse: {
+            /** @description Counted completes so far */
+            achieved: number;
+            /** @description Ends below target with probability over 20% */
+            atRisk: boolean;
+            /** @description Closed by the office: takes no more interviews */
+            closed: boolean;
+            /** @description Expected count */
+            expected: number;
+            /** Format: uuid */
+            id: string;
+            /** @example Women 18-34 */
+            label: string;
+            /** @description Lower end of the central interval at `level` */
+            lower: number;
+            /** @description The cell's completes per field day over the window */
+            pacePerDay: number;
+            /** @description Probability that the cell ends below its target */
+            probabilityBelowTarget: number;
+            target: number;
+            /** @description Upper end of the central interval at `level` */
+            upper: number;
+        };
         ProjectInterviewerRatesResponse: {
             /** @description Eligible share of unknown-eligibility cases, estimated once from the whole project */
             e: number | null;
@@ -1476,6 +1523,56 @@ export interface components {
             /** Format: uuid */
             projectId: string;
             rateNames: ("COOP1" | "REF2" | "CON2")[];
+        };
+        ProjectionResponse: {
+            /**
+             * Format: date
+             * @description Today in the project's time zone
+             */
+            asOf: string;
+            /** @description The total at the field end; null without a field end or a pace */
+            atEnd: components["schemas"]["CountIntervalResponse"] | null;
+            cells: components["schemas"]["ProjectedCellResponse"][];
+            /** @description Counted completes so far */
+            completes: number;
+            /** @description Counted completes with today as their field day */
+            completesToday: number;
+            /** Format: date-time */
+            computedAt: string;
+            /** @description Field days from today to the field end, both counted; 0 after it */
+            daysLeft: number | null;
+            /** Format: date */
+            fieldEnd: string | null;
+            /**
+             * @description Level of the central intervals
+             * @example 0.9
+             */
+            level: number;
+            /** @description Completes per field day over the window; null before a full field day */
+            pacePerDay: number | null;
+            /** @description Probability that the total ends below target */
+            probabilityBelowTarget: number | null;
+            /** @description Why part or all of the projection is missing, in words for the lead */
+            problem: string | null;
+            /** Format: uuid */
+            projectId: string;
+            /** @description The project's target number of completes */
+            target: number;
+            /** @description When the target is reached at the pace; null with no pace */
+            targetDate: components["schemas"]["TargetDateResponse"] | null;
+            targetReached: boolean;
+            /** @description Full field days in the pace window (at most 7) */
+            windowDays: number;
+            /**
+             * Format: date
+             * @description First field day of the pace window
+             */
+            windowFrom: string | null;
+            /**
+             * Format: date
+             * @description Last field day of the pace window
+             */
+            windowTo: string | null;
         };
         ProjectListItemResponse: {
             /**
@@ -1850,6 +1947,23 @@ export interface components {
              */
             share: number;
         };
+        TargetDateResponse: {
+            /**
+             * Format: date
+             * @description The day by which the target is reached with probability (1 − level)/2
+             */
+            earliest: string;
+            /**
+             * Format: date
+             * @description Today plus the completes still needed over the pace, rounded up
+             */
+            expected: string;
+            /**
+             * Format: date
+             * @description The day by which the target is reached with probability (1 + level)/2
+             */
+            latest: string;
+        };
         TargetsPreviewResponse: {
             cells: components["schemas"]["CellResponse"][];
         };
@@ -2068,6 +2182,7 @@ export type CellsResponse = components['schemas']['CellsResponse'];
 export type CellStatus = components['schemas']['CellStatus'];
 export type ChangeRoleDto = components['schemas']['ChangeRoleDto'];
 export type ContactFiguresResponse = components['schemas']['ContactFiguresResponse'];
+export type CountIntervalResponse = components['schemas']['CountIntervalResponse'];
 export type CreateProjectDto = components['schemas']['CreateProjectDto'];
 export type CreateUserDto = components['schemas']['CreateUserDto'];
 export type DecidedInterviewResponse = components['schemas']['DecidedInterviewResponse'];
@@ -2110,7 +2225,9 @@ export type ParsedTargetsResponse = components['schemas']['ParsedTargetsResponse
 export type ParsedVariableResponse = components['schemas']['ParsedVariableResponse'];
 export type PasswordSetResponse = components['schemas']['PasswordSetResponse'];
 export type PersonResponse = components['schemas']['PersonResponse'];
+export type ProjectedCellResponse = components['schemas']['ProjectedCellResponse'];
 export type ProjectInterviewerRatesResponse = components['schemas']['ProjectInterviewerRatesResponse'];
+export type ProjectionResponse = components['schemas']['ProjectionResponse'];
 export type ProjectListItemResponse = components['schemas']['ProjectListItemResponse'];
 export type ProjectMemberResponse = components['schemas']['ProjectMemberResponse'];
 export type ProjectResponse = components['schemas']['ProjectResponse'];
@@ -2147,6 +2264,7 @@ export type SyncBatchDto = components['schemas']['SyncBatchDto'];
 export type SyncReplyResponse = components['schemas']['SyncReplyResponse'];
 export type TargetCategoryDto = components['schemas']['TargetCategoryDto'];
 export type TargetCategoryResponse = components['schemas']['TargetCategoryResponse'];
+export type TargetDateResponse = components['schemas']['TargetDateResponse'];
 export type TargetsPreviewResponse = components['schemas']['TargetsPreviewResponse'];
 export type TargetsResponse = components['schemas']['TargetsResponse'];
 export type TargetVariableDto = components['schemas']['TargetVariableDto'];
@@ -2990,6 +3108,27 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["SyncReplyResponse"];
+                };
+            };
+        };
+    };
+    ProjectionController_projection: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProjectionResponse"];
                 };
             };
         };
