@@ -9,6 +9,7 @@ import {
   gridOutline,
   peopleOutline,
   pulseOutline,
+  trendingUpOutline,
   scaleOutline,
   statsChartOutline,
   sunnyOutline,
@@ -46,6 +47,8 @@ const PeoplePage = page(adminPages, 'PeoplePage');
 const ProjectPage = page(() => import('../features/projects/pages/project-page'), 'ProjectPage');
 const BalancePage = page(() => import('../features/balance/pages/balance-page'), 'BalancePage');
 const ProgressPage = page(() => import('../features/balance/pages/progress-page'), 'ProgressPage');
+const ProjectProjectionPage = page(() => import('../features/projection/pages/project-projection-page'), 'ProjectProjectionPage');
+const ClientProjectionPage = page(() => import('../features/projection/pages/client-projection-page'), 'ClientProjectionPage');
 
 export interface NavItem {
   path: string;
@@ -81,13 +84,17 @@ export const roleNavigation: Record<Role, NavItem[]> = {
         { path: '/lead/projects/:projectId/quota-board', element: <ProjectQuotaBoardPage /> },
         { path: '/lead/projects/:projectId/interviewers', element: <ProjectInterviewersPage /> },
         { path: '/lead/projects/:projectId/review', element: <ProjectReviewQueuePage /> },
+        { path: '/lead/projects/:projectId/projection', element: <ProjectProjectionPage /> },
       ],
     },
     { path: '/lead/balance', label: 'Balance', icon: scaleOutline, element: <BalancePage /> },
     { path: '/lead/benchmarks', label: 'Benchmarks', icon: gitCompareOutline, element: <BenchmarksPage /> },
     { path: '/lead/delivery', label: 'Delivery', icon: documentTextOutline, element: <DeliveryPage /> },
   ],
-  client: [{ path: '/client', label: 'Progress', icon: pulseOutline, element: <ProgressPage /> }],
+  client: [
+    { path: '/client', label: 'Progress', icon: pulseOutline, element: <ProgressPage /> },
+    { path: '/client/projection', label: 'Projection', icon: trendingUpOutline, element: <ClientProjectionPage /> },
+  ],
   admin: [{ path: '/admin', label: 'People', icon: peopleOutline, element: <PeoplePage /> }],
 };
 

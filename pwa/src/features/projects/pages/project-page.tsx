@@ -47,6 +47,9 @@ export function ProjectPage() {
               <Link to="/lead/balance" className="pl-back-link" onClick={() => rememberProject(p.id)}>
                 Balance →
               </Link>
+              <Link to={`/lead/projects/${p.id}/projection`} className="pl-back-link">
+                Projection →
+              </Link>
             </p>
             <section className="pl-section" aria-labelledby="pl-stage-heading">
               <h2 id="pl-stage-heading" className="pl-section-title">Stage</h2>
