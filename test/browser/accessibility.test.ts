@@ -128,6 +128,7 @@ describe('accessibility and width at 360×640', () => {
       `/lead/projects/${project}/quota-board`,
       `/lead/projects/${project}/interviewers`,
       `/lead/projects/${project}/review`,
+      `/lead/projects/${project}/projection`,
       '/lead/balance',
       '/lead/benchmarks',
       '/lead/delivery',
@@ -149,7 +150,7 @@ describe('accessibility and width at 360×640', () => {
 
   it('holds on the client’s and the admin’s pages', async () => {
     let page = await asRole('client@vellmoor.example', '/client');
-    const problems = await checkPages(page, ['/client']);
+    const problems = await checkPages(page, ['/client', '/client/projection']);
     await browser!.close();
     page = await asRole('admin@vellmoor.example', '/admin');
     problems.push(...(await checkPages(page, ['/admin'])));
