@@ -22,6 +22,7 @@ import { HealthModule } from './health/health.module.js';
 import { InterviewersModule } from './interviewers/interviewers.module.js';
 import { InterviewsModule } from './interviews/interviews.module.js';
 import { JobsModule } from './jobs/jobs.module.js';
+import { NextInterviewsModule } from './next-interviews/next-interviews.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
 import { QualityModule } from './quality/quality.module.js';
@@ -55,6 +56,7 @@ export class AppModule {
         UsersModule,
         ProjectsModule,
         QuotasModule,
+        NextInterviewsModule,
         AssignmentsModule,
         InterviewsModule,
         InterviewersModule,
