@@ -2,9 +2,10 @@ import './next-interviews.css';
 import { formatCount } from '../../../lib/format';
 import { useNextInterviews, type NextInterviews } from '../api/get-next-interviews';
 
-/** "age: 60+ × sex: female" as a supervisor says it: "60+ · female". */
+/** A cell as a supervisor says it: "Age band: 65+ × Sex: female" → "65+ · female"; "Education: basic" stays. */
 export function cellWords(label: string): string {
-  return label.split(' × ').map((part) => part.split(': ').at(-1)).join(' · ');
+  const parts = label.split(' × ');
+  return parts.length === 1 ? label : parts.map((part) => part.split(': ').at(-1)).join(' · ');
 }
 
 /** "18 in 60+ · female, 12 in North, 9 in South and 11 in 3 more cells": the plan in one sentence. */

@@ -38,11 +38,11 @@ async function openBoard(body: object) {
 describe('where the next interviews help most, on the quota board', () => {
   it('says in one sentence where the next 50 interviews go, lists every cell, and names the cells to hold back', async () => {
     const section = await openBoard(plan);
-    expect(await within(section).findByText(/^18 in 65\+ · female, 12 in 65\+ · male, 9 in Harrowby and 11 in 2 more cells\.$/)).toBeInTheDocument();
+    expect(await within(section).findByText(/^18 in 65\+ · female, 12 in 65\+ · male, 9 in region: Harrowby and 11 in 2 more cells\.$/)).toBeInTheDocument();
     expect(within(section).getByText('Next 50:')).toBeInTheDocument();
     const list = within(section).getByRole('list', { name: 'The next 50 interviews, by cell' });
     expect(within(list).getAllByRole('listitem').map((li) => li.textContent)).toEqual([
-      '18in 65+ · female', '12in 65+ · male', '9in Harrowby', '7in basic', '4in 35-64 · male',
+      '18in 65+ · female', '12in 65+ · male', '9in region: Harrowby', '7in education: basic', '4in 35-64 · male',
     ]);
     expect(section).toHaveTextContent('counts as 562 interviews instead of 512 now');
     const costly = within(section).getByRole('list', { name: 'Cells where more interviews cost precision' });
