@@ -1,7 +1,7 @@
-import { kishDesignEffect } from './design-effect.js';
 import { EstimationInputError } from './errors.js';
 import { resolveTargets } from './joint-targets.js';
-import { rake, type MarginTarget, type RakingCell, type RakingOptions } from './raking.js';
+import type { MarginTarget, RakingCell } from './raking.js';
+import { kish, WarmRaking } from './warm-raking.js';
 
 /** A quota cell as the supervisor sees it: the categories that define it, its target and its count. */
 export interface EffortQuotaCell {
@@ -49,41 +49,60 @@ export interface NextInterviews {
   costly: CellGain[];
 }
 
-/** Raking is re-run many times on nearby samples; tight tolerance keeps the gains comparable. */
-const RAKING: RakingOptions = { tolerance: 1e-10, maxIterations: 2000 };
-
-type Sample = Map<string, RakingCell>;
-
 const keyOf = (categories: Readonly<Record<string, string>>): string =>
   JSON.stringify(Object.entries(categories).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)));
 
-/** Kish's n_eff and deff of the raked weights of a sample of aggregated cells. */
-function kishOf(sample: Sample, targets: readonly MarginTarget[]): { effectiveSampleSize: number; designEffect: number } {
-  const cells = [...sample.values()];
-  const { weights } = rake(cells, targets, RAKING);
-  const { effectiveSampleSize, designEffect } = kishDesignEffect(weights, cells.map((c) => c.count));
-  return { effectiveSampleSize, designEffect };
-}
+const inside = (cell: RakingCell, quota: EffortQuotaCell): boolean =>
+  Object.entries(quota.categories).every(([v, category]) => cell.categories[v] === category);
 
 /**
- * One more interview in a quota cell, spread over the weighting cells inside it in proportion
- * to their counts now; a quota cell with no interviews yet takes the mix of the other
- * variables over the whole sample.
+ * The weighting cells, indexed once: the sample's own, and for a quota cell with no interviews
+ * yet the combinations its first interview would fall in. One more interview in a quota cell is
+ * spread over the weighting cells inside it in proportion to their counts at the time; a quota
+ * cell with no interviews takes the mix of the other variables over the sample as it is now.
  */
-function withOneMore(sample: Sample, quota: EffortQuotaCell): Sample {
-  const cells = [...sample.values()];
-  const inside = cells.filter((c) => Object.entries(quota.categories).every(([v, cat]) => c.categories[v] === cat));
-  const source = inside.length > 0 ? inside : cells;
-  const total = source.reduce((s, c) => s + c.count, 0);
-  const next: Sample = new Map([...sample].map(([k, c]) => [k, { ...c }]));
-  for (const c of source) {
-    const categories = { ...c.categories, ...quota.categories };
-    const key = keyOf(categories);
-    const cell = next.get(key) ?? { categories, count: 0 };
-    cell.count += c.count / total;
-    next.set(key, cell);
+class Cells {
+  readonly list: RakingCell[] = [];
+  private readonly index = new Map<string, number>();
+  private readonly members = new Map<string, number[]>();
+  private readonly firstSpread = new Map<string, { to: number; share: number }[]>();
+
+  constructor(sample: readonly RakingCell[], quotaCells: readonly EffortQuotaCell[]) {
+    for (const c of sample) if (c.count > 0) this.add(c.categories, c.count);
+    const original = [...this.list];
+    const n = original.reduce((s, c) => s + c.count, 0);
+    for (const q of quotaCells) {
+      if (original.some((c) => inside(c, q))) continue;
+      this.firstSpread.set(q.id, original.map((c) => ({ to: this.add({ ...c.categories, ...q.categories }, 0), share: c.count / n })));
+    }
+    for (const q of quotaCells) this.members.set(q.id, this.list.flatMap((c, j) => (inside(c, q) ? [j] : [])));
   }
-  return next;
+
+  private add(categories: Readonly<Record<string, string>>, count: number): number {
+    const key = keyOf(categories);
+    let j = this.index.get(key);
+    if (j === undefined) {
+      j = this.list.length;
+      this.index.set(key, j);
+      this.list.push({ categories: { ...categories }, count: 0 });
+    }
+    (this.list[j] as RakingCell).count += count;
+    return j;
+  }
+
+  counts(): Float64Array {
+    return Float64Array.from(this.list, (c) => c.count);
+  }
+
+  /** The counts with one more interview in quota cell `q`. */
+  withOneMore(counts: Float64Array, q: EffortQuotaCell): Float64Array {
+    const next = Float64Array.from(counts);
+    const members = this.members.get(q.id) ?? [];
+    const total = members.reduce((s, j) => s + (counts[j] as number), 0);
+    if (total > 0) for (const j of members) next[j] = (next[j] as number) + (counts[j] as number) / total;
+    else for (const { to, share } of this.firstSpread.get(q.id) ?? []) next[to] = (next[to] as number) + share;
+    return next;
+  }
 }
 
 function checkInput(cells: readonly RakingCell[], quotaCells: readonly EffortQuotaCell[], count: number): void {
@@ -106,6 +125,7 @@ function checkInput(cells: readonly RakingCell[], quotaCells: readonly EffortQuo
  * the plan takes the best cell, adds the interview, and repeats `count` times (a greedy
  * allocation, as in sequential optimum allocation; common practice). Cells at or over their
  * target whose next interview would raise the design effect are listed beside it.
+ * Every interview starts from base weight 1 (as in the balance); a cell's baseWeight is not used.
  * docs/methods.md, section "Where the next interviews help most".
  */
 export function nextInterviews(
@@ -115,19 +135,15 @@ export function nextInterviews(
   count: number,
 ): NextInterviews {
   checkInput(cells, quotaCells, count);
-  const raking = resolveTargets(targets).raking;
-  let sample: Sample = new Map();
-  for (const c of cells) {
-    if (c.count <= 0) continue;
-    const key = keyOf(c.categories);
-    const cell = sample.get(key) ?? { categories: { ...c.categories }, count: 0 };
-    cell.count += c.count;
-    sample.set(key, cell);
-  }
-  const now = kishOf(sample, raking);
-  const n = [...sample.values()].reduce((s, c) => s + c.count, 0);
+  const index = new Cells(cells, quotaCells);
+  const raking = new WarmRaking(index.list, resolveTargets(targets).raking);
+  let counts = index.counts();
+  let weights = raking.weights(counts);
+  const now = kish(counts, weights);
+  const n = counts.reduce((a, b) => a + b, 0);
   const gainOf = (q: EffortQuotaCell): CellGain => {
-    const after = kishOf(withOneMore(sample, q), raking);
+    const more = index.withOneMore(counts, q);
+    const after = kish(more, raking.weights(more, weights));
     return {
       id: q.id, label: q.label, target: q.target, achieved: q.achieved,
       remaining: Math.max(0, q.target - q.achieved),
@@ -147,15 +163,17 @@ export function nextInterviews(
   const order: string[] = [];
   let after = now.effectiveSampleSize;
   for (let step = 0; step < count; step++) {
-    let best: { q: EffortQuotaCell; sample: Sample; size: number } | null = null;
+    let best: { q: EffortQuotaCell; counts: Float64Array; weights: Float64Array; size: number } | null = null;
     for (const q of open) {
       if ((taken.get(q.id) ?? 0) >= q.target - q.achieved) continue;
-      const next = withOneMore(sample, q);
-      const size = kishOf(next, raking).effectiveSampleSize;
-      if (best === null || size > best.size) best = { q, sample: next, size };
+      const more = index.withOneMore(counts, q);
+      const w = raking.weights(more, weights);
+      const size = kish(more, w).effectiveSampleSize;
+      if (best === null || size > best.size) best = { q, counts: more, weights: w, size };
     }
     if (best === null) break;
-    sample = best.sample;
+    counts = best.counts;
+    weights = best.weights;
     after = best.size;
     if (!taken.has(best.q.id)) order.push(best.q.id);
     taken.set(best.q.id, (taken.get(best.q.id) ?? 0) + 1);
