@@ -67,7 +67,7 @@ describe('where the next interviews help most', () => {
     await section.getByText(new RegExp(`^Next 50: ${first.interviews} in ${words(first.label).replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`)).waitFor();
     // The seeded demo has cells past their target.
     expect(plan.costly.length).toBeGreaterThan(0);
-    const costly = section.getByRole('list', { name: 'Cells where more interviews cost precision' });
+    const costly = section.getByRole('list', { name: 'Hold back: more interviews here cost precision' });
     const shown = await costly.getByRole('listitem').allTextContents();
     expect(shown.map((text) => text.replace(/ [\d,]+ of [\d,]+, .*$/, ''))).toEqual(plan.costly.map((c) => words(c.label)));
     await section.scrollIntoViewIfNeeded();

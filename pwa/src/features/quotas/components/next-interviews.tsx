@@ -71,7 +71,7 @@ function NextPlan({ data }: { data: NextInterviews }) {
       {data.costly.length > 0 ? (
         <div className="pl-next-costly">
           <h3 className="pl-next-subtitle">Hold back here: more interviews now cost precision</h3>
-          <ul aria-label="Cells where more interviews cost precision">
+          <ul aria-label="Hold back: more interviews here cost precision">
             {data.costly.map((c) => (
               <li key={c.id}>
                 <span>{cellWords(c.label)}</span>{' '}

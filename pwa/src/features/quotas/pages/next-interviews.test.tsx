@@ -45,7 +45,7 @@ describe('where the next interviews help most, on the quota board', () => {
       '18in 65+ · female', '12in 65+ · male', '9in region: Harrowby', '7in education: basic', '4in 35-64 · male',
     ]);
     expect(section).toHaveTextContent('counts as 562 interviews instead of 512 now');
-    const costly = within(section).getByRole('list', { name: 'Cells where more interviews cost precision' });
+    const costly = within(section).getByRole('list', { name: 'Hold back: more interviews here cost precision' });
     expect(costly).toHaveTextContent('18-34 · female 95 of 80, 15 over target');
   });
 
