@@ -22,6 +22,7 @@ import { HealthModule } from './health/health.module.js';
 import { InterviewersModule } from './interviewers/interviewers.module.js';
 import { InterviewsModule } from './interviews/interviews.module.js';
 import { JobsModule } from './jobs/jobs.module.js';
+import { NextInterviewsModule } from './next-interviews/next-interviews.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { ProjectionModule } from './projection/projection.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
@@ -57,6 +58,7 @@ export class AppModule {
         ProjectsModule,
         ProjectionModule,
         QuotasModule,
+        NextInterviewsModule,
         AssignmentsModule,
         InterviewsModule,
         InterviewersModule,

@@ -513,6 +513,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/next-interviews": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["NextInterviewsController_next"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{projectId}/projection": {
         parameters: {
             query?: never;
@@ -1024,6 +1040,21 @@ export interface components {
             /** @example Age band */
             variable: string;
         };
+        CellGainResponse: {
+            /** @description Counted interviews in the cell */
+            achieved: number;
+            /** @description Change in the design effect from one more interview in the cell */
+            designEffectChange: number;
+            /** @description Change in the effective sample size from one more interview in the cell */
+            gain: number;
+            /** Format: uuid */
+            id: string;
+            /** @example age: 60+ × sex: female */
+            label: string;
+            /** @description target − achieved, at least 0 */
+            remaining: number;
+            target: number;
+        };
         CellOptionResponse: {
             /** Format: uuid */
             id: string;
@@ -1370,6 +1401,31 @@ export interface components {
             /** @example If that address has an account, a link to choose a new password is on its way */
             message: string;
         };
+        NextInterviewsResponse: {
+            /** Format: date-time */
+            computedAt: string;
+            /** @description Cells at or over target where one more interview raises the design effect */
+            costly: components["schemas"]["CellGainResponse"][];
+            /** @description Interviews asked for */
+            count: number;
+            designEffect: number | null;
+            /** @description Kish effective sample size now; null while weights cannot be computed */
+            effectiveSampleSize: number | null;
+            /** @description Kish effective sample size once the plan is done */
+            effectiveSampleSizeAfter: number | null;
+            /** @description Completed interviews weighted now */
+            n: number;
+            /** @description The next interviews, chosen one at a time; most interviews first */
+            plan: components["schemas"]["PlannedCellResponse"][];
+            /** @description Interviews in the plan; fewer than count when the open cells have less room */
+            planned: number;
+            /** @description Why no plan can be made yet, in words for the supervisor */
+            problem: string | null;
+            /** Format: uuid */
+            projectId: string;
+            /** @description Open cells, best first, by the gain of one more interview now */
+            ranking: components["schemas"]["CellGainResponse"][];
+        };
         OrganisationRefResponse: {
             /** Format: uuid */
             id: string;
@@ -1490,6 +1546,14 @@ export interface components {
              * @enum {string}
              */
             status: "invited" | "active" | "disabled";
+        };
+        PlannedCellResponse: {
+            /** Format: uuid */
+            id: string;
+            /** @description Interviews of the plan in this cell */
+            interviews: number;
+            /** @example age: 60+ × sex: female */
+            label: string;
         };
         ProjectedCellResponse: {
             /** @description Counted completes so far */
@@ -2176,6 +2240,7 @@ export type BalanceOutcomeResponse = components['schemas']['BalanceOutcomeRespon
 export type BalanceResponse = components['schemas']['BalanceResponse'];
 export type BurstsDto = components['schemas']['BurstsDto'];
 export type CategoryNameResponse = components['schemas']['CategoryNameResponse'];
+export type CellGainResponse = components['schemas']['CellGainResponse'];
 export type CellOptionResponse = components['schemas']['CellOptionResponse'];
 export type CellResponse = components['schemas']['CellResponse'];
 export type CellsResponse = components['schemas']['CellsResponse'];
@@ -2213,6 +2278,7 @@ export type LoginDto = components['schemas']['LoginDto'];
 export type MergeChoiceResponse = components['schemas']['MergeChoiceResponse'];
 export type MergeRetiredDto = components['schemas']['MergeRetiredDto'];
 export type MessageResponse = components['schemas']['MessageResponse'];
+export type NextInterviewsResponse = components['schemas']['NextInterviewsResponse'];
 export type OrganisationRefResponse = components['schemas']['OrganisationRefResponse'];
 export type OtherAnswer = components['schemas']['OtherAnswer'];
 export type OtherAnswerResponse = components['schemas']['OtherAnswerResponse'];
@@ -2225,6 +2291,7 @@ export type ParsedTargetsResponse = components['schemas']['ParsedTargetsResponse
 export type ParsedVariableResponse = components['schemas']['ParsedVariableResponse'];
 export type PasswordSetResponse = components['schemas']['PasswordSetResponse'];
 export type PersonResponse = components['schemas']['PersonResponse'];
+export type PlannedCellResponse = components['schemas']['PlannedCellResponse'];
 export type ProjectedCellResponse = components['schemas']['ProjectedCellResponse'];
 export type ProjectInterviewerRatesResponse = components['schemas']['ProjectInterviewerRatesResponse'];
 export type ProjectionResponse = components['schemas']['ProjectionResponse'];
@@ -3108,6 +3175,30 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["SyncReplyResponse"];
+                };
+            };
+        };
+    };
+    NextInterviewsController_next: {
+        parameters: {
+            query?: {
+                /** @description Interviews to plan (default 50) */
+                count?: number;
+            };
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["NextInterviewsResponse"];
                 };
             };
         };

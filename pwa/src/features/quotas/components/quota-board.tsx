@@ -15,6 +15,7 @@ import { CellTable } from './cell-table';
 import { CloseCellDialog } from './close-cell-dialog';
 import { FlaggedInterviewsSection } from './flagged-interviews';
 import { InterviewerProgressTable } from './interviewer-progress';
+import { NextInterviewsSection } from './next-interviews';
 
 /** One project's board: cells (table on desktop, list on a phone) and interviewers' completes. */
 export function QuotaBoard({ projectId }: { projectId: string }) {
@@ -81,6 +82,7 @@ function BoardContent({ board, projectId, refreshing, checkedAt }: { board: Boar
       ) : (
         <CellList cells={cells} onToggle={ask} />
       )}
+      <NextInterviewsSection projectId={projectId} />
       <FlaggedInterviewsSection projectId={projectId} />
       <section className="pl-section" aria-labelledby="pl-interviewers-heading">
         <h2 id="pl-interviewers-heading" className="pl-section-title">
