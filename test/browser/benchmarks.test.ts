@@ -57,4 +57,18 @@ describe("the lead's benchmarks page", () => {
     await page.getByRole('button', { name: 'Remove Harbour Gazette street poll' }).click();
     await page.getByRole('heading', { name: 'Harbour Gazette street poll' }).waitFor({ state: 'detached' });
   });
+
+  it("shows the client the same reconciliation read-only on the phone", async () => {
+    browser = await openBrowser(PHONE);
+    const { page } = browser;
+    await signIn(page, baseUrl, 'client@vellmoor.example');
+    await page.waitForURL(`${baseUrl}/client`);
+    await page.getByRole('link', { name: 'Other polls' }).click();
+    await page.getByText('Likely true share').waitFor();
+    await page.getByRole('table', { name: 'Bias factor of each method group' }).getByRole('row', { name: /Online panel/ }).waitFor();
+    expect(await page.getByRole('region', { name: 'Read the reconciliation with care' }).textContent()).toMatch(/only as good as the assumption/);
+    expect(await page.getByLabel('Spread prior of an unknown bias').count()).toBe(0);
+    expect(await page.getByRole('button', { name: 'Record another poll' }).count()).toBe(0);
+    await screenshot(page, 'benchmarks-client-phone');
+  });
 });

@@ -46,6 +46,7 @@ const PeoplePage = page(adminPages, 'PeoplePage');
 const ProjectPage = page(() => import('../features/projects/pages/project-page'), 'ProjectPage');
 const BalancePage = page(() => import('../features/balance/pages/balance-page'), 'BalancePage');
 const ProgressPage = page(() => import('../features/balance/pages/progress-page'), 'ProgressPage');
+const ReconciliationPage = page(() => import('../features/benchmarks/pages/reconciliation-page'), 'ReconciliationPage');
 
 export interface NavItem {
   path: string;
@@ -87,7 +88,10 @@ export const roleNavigation: Record<Role, NavItem[]> = {
     { path: '/lead/benchmarks', label: 'Benchmarks', icon: gitCompareOutline, element: <BenchmarksPage /> },
     { path: '/lead/delivery', label: 'Delivery', icon: documentTextOutline, element: <DeliveryPage /> },
   ],
-  client: [{ path: '/client', label: 'Progress', icon: pulseOutline, element: <ProgressPage /> }],
+  client: [
+    { path: '/client', label: 'Progress', icon: pulseOutline, element: <ProgressPage /> },
+    { path: '/client/other-polls', label: 'Other polls', icon: gitCompareOutline, element: <ReconciliationPage /> },
+  ],
   admin: [{ path: '/admin', label: 'People', icon: peopleOutline, element: <PeoplePage /> }],
 };
 

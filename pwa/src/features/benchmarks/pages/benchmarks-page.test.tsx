@@ -70,3 +70,19 @@ describe("lead's benchmarks page", () => {
     });
   });
 });
+
+describe("client's other-polls page", () => {
+  it('shows the reconciliation and its cautions read-only, with no spread to change', async () => {
+    const api = installFakeApi();
+    api.on('GET', '/api/projects', () => json([project]));
+    api.on('GET', '/api/projects/p1/reconciliation', () => json(reconciliation));
+    await signedInAs('client');
+    renderApp('/client/other-polls');
+
+    expect(await screen.findByText('43.0%')).toBeInTheDocument();
+    expect(screen.getByRole('region', { name: 'Read the reconciliation with care' })).toHaveTextContent(/only as good as the assumption/);
+    expect(screen.queryByLabelText('Spread prior of an unknown bias')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Record another poll' })).toBeNull();
+    expect(api.calls.some((c) => c.path.endsWith('/benchmarks'))).toBe(false);
+  });
+});
