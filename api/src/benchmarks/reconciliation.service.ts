@@ -6,7 +6,7 @@ import { BalanceService } from '../balance/balance.service.js';
 import { KNEX } from '../database/database.constants.js';
 import type { ProjectRow } from '../database/tables.js';
 import { effectivePoll } from '../estimation/own-poll.js';
-import { DEFAULT_SPREAD, reconcile, type BiasSpec, type ShareSummary } from '../estimation/reconcile.js';
+import { DEFAULT_SPREAD, reconcile, type BiasSpec, type ReconcileInput, type ShareSummary } from '../estimation/reconcile.js';
 import { BenchmarksService } from './benchmarks.service.js';
 import { cautions, OWN_GROUP, OWN_POLL, reconciliationInput, type OwnFigure } from './reconciliation-input.js';
 
@@ -42,8 +42,13 @@ export interface Reconciliation {
   computedAt: string;
 }
 
+/** Recent results by input: the engine takes a few hundred milliseconds and the page asks every minute. */
+const REMEMBERED = 200;
+
 @Injectable()
 export class ReconciliationService {
+  private readonly recent = new Map<string, ReturnType<typeof reconcile>>();
+
   constructor(
     @Inject(KNEX) private readonly db: Knex,
     private readonly benchmarks: BenchmarksService,
@@ -70,7 +75,7 @@ export class ReconciliationService {
     if (input.polls.length === 0) {
       return { ...base, problem: 'No polls yet: record another poll on the same question, or wait for the project’s own weighted share.', truth: null, groups: [], polls: [], cautions: cautions(input, spread, own, ownMissing) };
     }
-    const result = reconcile(input);
+    const result = this.reconcileOnce(input);
     const source = new Map(polls.map((p) => [p.id, p.source]));
     return {
       ...base,
@@ -99,5 +104,16 @@ export class ReconciliationService {
       }),
       cautions: cautions(input, spread, own, ownMissing),
     };
+  }
+
+  /** The engine is deterministic, so the same input always gives the same result. */
+  private reconcileOnce(input: ReconcileInput): ReturnType<typeof reconcile> {
+    const key = JSON.stringify(input);
+    const known = this.recent.get(key);
+    if (known) return known;
+    const result = reconcile(input);
+    if (this.recent.size >= REMEMBERED) this.recent.delete(this.recent.keys().next().value as string);
+    this.recent.set(key, result);
+    return result;
   }
 }
