@@ -51,7 +51,7 @@ export class BenchmarksController {
   @Delete('benchmarks/:pollId')
   @Roles('lead', 'admin')
   @HttpCode(204)
-  @ApiNoContentResponse()
+  @ApiNoContentResponse({ description: 'The poll is removed' })
   async remove(@CurrentUser() user: AuthUser, @Param('projectId', ParseUUIDPipe) projectId: string, @Param('pollId', ParseUUIDPipe) pollId: string) {
     await this.access.findEditable(user, projectId);
     await this.benchmarks.remove(projectId, pollId);

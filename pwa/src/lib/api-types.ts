@@ -3057,6 +3057,7 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description The poll is removed */
             204: {
                 headers: {
                     [name: string]: unknown;
