@@ -22,6 +22,7 @@ import * as m0060 from './20261202006000_quality_control.js';
 import * as m0062 from './20261202006200_review_queue_indexes.js';
 import * as m0063 from './20261202006300_backchecks_follow_interviews.js';
 import * as m0064 from './20261202006400_quota_full_and_eligibility.js';
+import * as m0730 from './20261202007300_benchmarks.js';
 
 const migrations: Record<string, Knex.Migration> = {
   '20261202000100_organisations_and_users': m0001,
@@ -44,6 +45,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202006200_review_queue_indexes': m0062,
   '20261202006300_backchecks_follow_interviews': m0063,
   '20261202006400_quota_full_and_eligibility': m0064,
+  '20261202007300_benchmarks': m0730,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -10,6 +10,7 @@ import { AssignmentsModule } from './assignments/assignments.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BackchecksModule } from './backchecks/backchecks.module.js';
 import { BalanceModule } from './balance/balance.module.js';
+import { BenchmarksModule } from './benchmarks/benchmarks.module.js';
 import { AllExceptionsFilter } from './common/filters/http-exception.filter.js';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard.js';
 import { RolesGuard } from './common/guards/roles.guard.js';
@@ -63,6 +64,7 @@ export class AppModule {
         InterviewsModule,
         InterviewersModule,
         BalanceModule,
+        BenchmarksModule,
         QualityModule,
         BackchecksModule,
         ReviewModule,

@@ -150,7 +150,7 @@ describe('accessibility and width at 360×640', () => {
 
   it('holds on the client’s and the admin’s pages', async () => {
     let page = await asRole('client@vellmoor.example', '/client');
-    const problems = await checkPages(page, ['/client', '/client/projection']);
+    const problems = await checkPages(page, ['/client', '/client/projection', '/client/other-polls']);
     await browser!.close();
     page = await asRole('admin@vellmoor.example', '/admin');
     problems.push(...(await checkPages(page, ['/admin'])));

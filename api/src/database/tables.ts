@@ -279,6 +279,34 @@ export interface BackcheckRow {
   recorded_at: Date | null;
 }
 
+/** A method group of benchmark polls and what is known of its bias (migration 20261202007300). */
+export interface BenchmarkGroupRow {
+  project_id: string;
+  name: string;
+  bias_kind: 'none' | 'known' | 'unknown';
+  /** Set only for a known bias. */
+  bias_factor: number | null;
+}
+
+/** Another poll on the project's headline question. */
+export interface BenchmarkPollRow {
+  id: string;
+  project_id: string;
+  source: string;
+  field_start: string;
+  field_end: string;
+  method_group: string;
+  yes: number;
+  sample_size: number;
+  created_at: Date;
+}
+
+export interface BenchmarkSettingsRow {
+  project_id: string;
+  /** Standard deviation of an unknown group's bias factor (its prior). */
+  unknown_spread: number;
+}
+
 declare module 'knex/types/tables.js' {
   interface Tables {
     organisations: OrganisationRow;
@@ -304,5 +332,8 @@ declare module 'knex/types/tables.js' {
     interviewer_tests: InterviewerTestRow;
     review_decisions: ReviewDecisionRow;
     backchecks: BackcheckRow;
+    benchmark_groups: BenchmarkGroupRow;
+    benchmark_polls: BenchmarkPollRow;
+    benchmark_settings: BenchmarkSettingsRow;
   }
 }

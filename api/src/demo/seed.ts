@@ -19,6 +19,7 @@ import { TargetsService } from '../quotas/targets.service.js';
 import { habitsOf } from './habits.js';
 import { addOutcomeDetails } from './outcome-details.js';
 import { seedBackchecks } from './backchecks.js';
+import { seedBenchmarks } from './benchmarks.js';
 import { drawRespondent, seeded, VELLMOOR_AGE_SEX, VELLMOOR_TARGETS } from './vellmoor.js';
 
 export const DEMO_PASSWORD = 'plumbline-demo';
@@ -131,6 +132,7 @@ export async function seedDemo(db: Knex, today = Date.now()): Promise<boolean> {
   }
   await addOutcomeDetails(db, project.id);
   await seedBackchecks(db, project.id, today);
+  await seedBenchmarks(db, project.id, today);
   // The flags exist as soon as the demo starts (a server would queue this after each sync).
   await runQualityCheck(db, project.id);
   return true;

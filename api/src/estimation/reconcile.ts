@@ -3,7 +3,8 @@ import { chanceOutlierProbability } from './beta-binomial.js';
 import { checkCounts, checkPrior } from './beta-posterior.js';
 import { EstimationInputError } from './errors.js';
 import { expit, logit } from './bias-factor.js';
-import { GridDensity, linspace, logSigmoid, logSumExp, massRange } from './grid.js';
+import { GridDensity, massRange } from './grid.js';
+import { runPass, type GroupModel, type PassResult } from './reconcile-pass.js';
 
 export type BiasSpec =
   | { kind: 'none' }
@@ -54,17 +55,6 @@ export interface Reconciliation {
 
 export const DEFAULT_SPREAD = 0.04;
 
-interface GroupModel {
-  id: string;
-  /** Pooled successes and trials: every poll in a group reports the same q(p, b). */
-  k: number;
-  n: number;
-  /** logit(b) when fixed (none or known), else null. */
-  fixedLogit: number | null;
-  /** Beta(α, β) parameters of b when unknown. */
-  alpha: number;
-  beta: number;
-}
 
 /** Grid sizes per pass (true share, each unknown bias factor): the first passes find where the mass is. */
 const PASSES: readonly [number, number][] = [[401, 301], [401, 301], [801, 401], [1201, 801]];
@@ -188,51 +178,4 @@ function priorLogitRange(m: GroupModel): [number, number] {
   const lo = logit(Math.max(1e-300, jStat.beta.inv(1e-13, m.alpha, m.beta)));
   const hi = logit(Math.min(1 - 1e-16, jStat.beta.inv(1 - 1e-13, m.alpha, m.beta)));
   return [Math.max(-30, Number.isFinite(lo) ? lo : -30), Math.min(30, Number.isFinite(hi) ? hi : 30)];
-}
-
-interface PassResult {
-  xs: Float64Array;
-  logPost: Float64Array;
-  bMarginals: { grid: Float64Array; logDensity: Float64Array }[];
-}
-
-/** Log density of logit(v) when v ~ Beta(a, b), up to a constant. */
-const logitBetaLogDensity = (t: number, a: number, b: number): number => a * logSigmoid(t) + b * logSigmoid(-t);
-
-const groupLogLik = (m: GroupModel, eta: number): number => m.k * logSigmoid(eta) + (m.n - m.k) * logSigmoid(-eta);
-
-function runPass(
-  prior: readonly [number, number], models: GroupModel[], unknown: GroupModel[],
-  xRange: [number, number], bRanges: [number, number][], nx: number, nb: number,
-): PassResult {
-  const xs = linspace(xRange[0], xRange[1], nx);
-  const logPost = xs.map((x) => {
-    let v = logitBetaLogDensity(x, prior[0], prior[1]);
-    for (const m of models) if (m.fixedLogit !== null) v += groupLogLik(m, x + m.fixedLogit);
-    return v;
-  });
-  const joint = unknown.map((m, g) => {
-    const range = bRanges[g] as [number, number];
-    const bs = linspace(range[0], range[1], nb);
-    const logPriorB = bs.map((b) => logitBetaLogDensity(b, m.alpha, m.beta));
-    const terms = new Float64Array(nx * nb);
-    const logL = new Float64Array(nx);
-    xs.forEach((x, j) => {
-      const row = terms.subarray(j * nb, (j + 1) * nb);
-      bs.forEach((b, l) => (row[l] = (logPriorB[l] as number) + groupLogLik(m, x + b)));
-      logL[j] = logSumExp(row);
-    });
-    logL.forEach((v, j) => (logPost[j] = (logPost[j] as number) + v));
-    return { bs, terms, logL };
-  });
-  const bMarginals = joint.map(({ bs, terms, logL }) => {
-    const logDensity = new Float64Array(nb);
-    const column = new Float64Array(nx);
-    bs.forEach((_, l) => {
-      xs.forEach((_, j) => (column[j] = (logPost[j] as number) - (logL[j] as number) + (terms[j * nb + l] as number)));
-      logDensity[l] = logSumExp(column);
-    });
-    return { grid: bs, logDensity };
-  });
-  return { xs, logPost, bMarginals };
 }

@@ -8,7 +8,7 @@ const homes: { role: Role; path: string; title: string; sections: string[] }[] =
   { role: 'interviewer', path: '/interviewer', title: 'Today', sections: ['Today', 'Outbox', 'Cells'] },
   { role: 'supervisor', path: '/supervisor', title: 'Quota board', sections: ['Quota board', 'Review queue', 'Interviewers', 'Back-checks'] },
   { role: 'lead', path: '/lead', title: 'Projects', sections: ['Projects', 'Balance', 'Benchmarks', 'Delivery'] },
-  { role: 'client', path: '/client', title: 'Progress', sections: ['Progress', 'Projection'] },
+  { role: 'client', path: '/client', title: 'Progress', sections: ['Progress', 'Projection', 'Other polls'] },
   { role: 'admin', path: '/admin', title: 'People', sections: [] },
 ];
 

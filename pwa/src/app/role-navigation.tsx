@@ -49,6 +49,7 @@ const BalancePage = page(() => import('../features/balance/pages/balance-page'),
 const ProgressPage = page(() => import('../features/balance/pages/progress-page'), 'ProgressPage');
 const ProjectProjectionPage = page(() => import('../features/projection/pages/project-projection-page'), 'ProjectProjectionPage');
 const ClientProjectionPage = page(() => import('../features/projection/pages/client-projection-page'), 'ClientProjectionPage');
+const ReconciliationPage = page(() => import('../features/benchmarks/pages/reconciliation-page'), 'ReconciliationPage');
 
 export interface NavItem {
   path: string;
@@ -94,6 +95,7 @@ export const roleNavigation: Record<Role, NavItem[]> = {
   client: [
     { path: '/client', label: 'Progress', icon: pulseOutline, element: <ProgressPage /> },
     { path: '/client/projection', label: 'Projection', icon: trendingUpOutline, element: <ClientProjectionPage /> },
+    { path: '/client/other-polls', label: 'Other polls', icon: gitCompareOutline, element: <ReconciliationPage /> },
   ],
   admin: [{ path: '/admin', label: 'People', icon: peopleOutline, element: <PeoplePage /> }],
 };

@@ -369,6 +369,38 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/projects/{projectId}/benchmarks": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["BenchmarksController_list"];
+        put?: never;
+        post: operations["BenchmarksController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/benchmarks/{pollId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["BenchmarksController_update"];
+        post?: never;
+        delete: operations["BenchmarksController_remove"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/projects/{projectId}/cells": {
         parameters: {
             query?: never;
@@ -554,6 +586,38 @@ export interface paths {
         };
         get: operations["QuotasController_board"];
         put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/reconciliation": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["BenchmarksController_reconciliation"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/projects/{projectId}/reconciliation/settings": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put: operations["BenchmarksController_settings"];
         post?: never;
         delete?: never;
         options?: never;
@@ -1025,6 +1089,62 @@ export interface components {
             weightMin: number | null;
             /** @description Figures not given because they cannot be trusted, each with its reason */
             withheld: components["schemas"]["WithheldFigureResponse"][];
+        };
+        BenchmarkListResponse: {
+            polls: components["schemas"]["BenchmarkPollResponse"][];
+        };
+        BenchmarkPollDto: {
+            /** @description The known bias factor (0–1, 0.5 is no bias); only with groupBias "known" */
+            biasFactor?: number;
+            /** @example 2026-11-24 */
+            fieldEnd: string;
+            /** @example 2026-11-20 */
+            fieldStart: string;
+            /**
+             * @description What is known of the method group's bias; applies to every poll of the group
+             * @enum {string}
+             */
+            groupBias: "none" | "known" | "unknown";
+            /**
+             * @description Polls of one method group share one bias factor
+             * @example Online panel
+             */
+            methodGroup: string;
+            /** @example 800 */
+            sampleSize: number;
+            /** @description Share who said yes, a proportion (0–1); the yes count is its share of the sample, rounded */
+            share?: number;
+            /** @example Vellmoor Courier poll */
+            source: string;
+            /** @description How many said yes */
+            yes?: number;
+        };
+        BenchmarkPollResponse: {
+            biasFactor: number | null;
+            /** @example 2026-11-24 */
+            fieldEnd: string;
+            /** @example 2026-11-20 */
+            fieldStart: string;
+            /** @enum {string} */
+            groupBias: "none" | "known" | "unknown";
+            /** Format: uuid */
+            id: string;
+            methodGroup: string;
+            sampleSize: number;
+            /** @description yes / sampleSize */
+            share: number;
+            source: string;
+            yes: number;
+        };
+        BiasSpecResponse: {
+            /** @description The fixed factor of a known bias */
+            factor?: number;
+            /** @enum {string} */
+            kind: "none" | "known" | "unknown";
+            /** @description Prior mean of an unknown group's factor */
+            mean?: number;
+            /** @description Prior standard deviation of an unknown group's factor */
+            spread?: number;
         };
         BurstsDto: {
             enabled: boolean;
@@ -1771,6 +1891,50 @@ export interface components {
              */
             name: string;
         };
+        ReconciledGroupResponse: {
+            bias: components["schemas"]["BiasSpecResponse"];
+            lower: number;
+            /** @description Posterior mean of the bias factor */
+            meanFactor: number;
+            name: string;
+            /** @description P(factor > 0.5): the group overstates the share */
+            probOverstates: number;
+            /** @description P(factor < 0.5): the group understates the share */
+            probUnderstates: number;
+            upper: number;
+        };
+        ReconciledPollResponse: {
+            chanceOutlierProbability: number;
+            /** @description The poll id, or "project" for the project’s own figure */
+            id: string;
+            methodGroup: string;
+            own: boolean;
+            source: string;
+            /** @description Yes count used (for the project: w·n*, rounded) */
+            successes: number;
+            /** @description Sample size used (for the project: n* = w(1−w)/SE², rounded) */
+            trials: number;
+        };
+        ReconciliationResponse: {
+            cautions: string[];
+            /** Format: date-time */
+            computedAt: string;
+            defaultSpread: number;
+            groups: components["schemas"]["ReconciledGroupResponse"][];
+            polls: components["schemas"]["ReconciledPollResponse"][];
+            problem: string | null;
+            /** @description Standard deviation of an unknown group's bias factor used (the spread prior) */
+            spread: number;
+            /** @description The reconciled estimate of the true share */
+            truth: components["schemas"]["ShareSummaryResponse"] | null;
+        };
+        ReconciliationSettingsDto: {
+            /**
+             * @description Standard deviation of an unknown group's bias factor around 0.5 (its prior); 0.001 to 0.2
+             * @example 0.04
+             */
+            spread: number;
+        };
         RecordOutcomeDto: {
             /** @description What differed; required when the outcome is not_confirmed */
             note?: string;
@@ -1938,6 +2102,14 @@ export interface components {
             password: string;
             /** @description The part of the link after "#token=" */
             token: string;
+        };
+        ShareSummaryResponse: {
+            /** @description Lower end of the 95% interval */
+            lower: number;
+            mean: number;
+            median: number;
+            /** @description Upper end of the 95% interval */
+            upper: number;
         };
         ShownRatesResponse: {
             /** @description AAPOR CON2: ((I+P)+R+O) / ((I+P)+R+O+NC + e(UH+UO)) */
@@ -2238,6 +2410,10 @@ export type BackcheckTallyResponse = components['schemas']['BackcheckTallyRespon
 export type BalanceMarginResponse = components['schemas']['BalanceMarginResponse'];
 export type BalanceOutcomeResponse = components['schemas']['BalanceOutcomeResponse'];
 export type BalanceResponse = components['schemas']['BalanceResponse'];
+export type BenchmarkListResponse = components['schemas']['BenchmarkListResponse'];
+export type BenchmarkPollDto = components['schemas']['BenchmarkPollDto'];
+export type BenchmarkPollResponse = components['schemas']['BenchmarkPollResponse'];
+export type BiasSpecResponse = components['schemas']['BiasSpecResponse'];
 export type BurstsDto = components['schemas']['BurstsDto'];
 export type CategoryNameResponse = components['schemas']['CategoryNameResponse'];
 export type CellGainResponse = components['schemas']['CellGainResponse'];
@@ -2304,6 +2480,10 @@ export type QualitySettingsResponse = components['schemas']['QualitySettingsResp
 export type QuotaBoardResponse = components['schemas']['QuotaBoardResponse'];
 export type QuotaCategoryResponse = components['schemas']['QuotaCategoryResponse'];
 export type QuotaVariableResponse = components['schemas']['QuotaVariableResponse'];
+export type ReconciledGroupResponse = components['schemas']['ReconciledGroupResponse'];
+export type ReconciledPollResponse = components['schemas']['ReconciledPollResponse'];
+export type ReconciliationResponse = components['schemas']['ReconciliationResponse'];
+export type ReconciliationSettingsDto = components['schemas']['ReconciliationSettingsDto'];
 export type RecordOutcomeDto = components['schemas']['RecordOutcomeDto'];
 export type RefreshDto = components['schemas']['RefreshDto'];
 export type RejectedItemResponse = components['schemas']['RejectedItemResponse'];
@@ -2322,6 +2502,7 @@ export type SessionResponse = components['schemas']['SessionResponse'];
 export type SetAssignmentDto = components['schemas']['SetAssignmentDto'];
 export type SetMembersDto = components['schemas']['SetMembersDto'];
 export type SetPasswordDto = components['schemas']['SetPasswordDto'];
+export type ShareSummaryResponse = components['schemas']['ShareSummaryResponse'];
 export type ShownRatesResponse = components['schemas']['ShownRatesResponse'];
 export type SignUpDto = components['schemas']['SignUpDto'];
 export type SignUpResponse = components['schemas']['SignUpResponse'];
@@ -2977,6 +3158,99 @@ export interface operations {
             };
         };
     };
+    BenchmarksController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BenchmarkListResponse"];
+                };
+            };
+        };
+    };
+    BenchmarksController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["BenchmarkPollDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BenchmarkPollResponse"];
+                };
+            };
+        };
+    };
+    BenchmarksController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                pollId: string;
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["BenchmarkPollDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["BenchmarkPollResponse"];
+                };
+            };
+        };
+    };
+    BenchmarksController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                pollId: string;
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The poll is removed */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     QuotasController_getCells: {
         parameters: {
             query?: never;
@@ -3241,6 +3515,52 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["QuotaBoardResponse"];
+                };
+            };
+        };
+    };
+    BenchmarksController_reconciliation: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReconciliationResponse"];
+                };
+            };
+        };
+    };
+    BenchmarksController_settings: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                projectId: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ReconciliationSettingsDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReconciliationResponse"];
                 };
             };
         };
